@@ -1,0 +1,89 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import request from 'supertest';
+import { ConfigError, loadConfig } from '../../server/config';
+import { openDatabase, rawDatabase } from '../../server/db/data-source';
+import { seed } from '../../server/seed/seed';
+import { createTestApp, HOST } from './test-app';
+
+describe('configuration', () => {
+  it('when nothing is set, then the embedded defaults apply', () => {
+    const c = loadConfig({});
+    expect(c.port).toBe(8080);
+    expect(c.dataDir).toBe(path.resolve('data'));
+    expect(c.databasePath).toBe(path.resolve('data', 'dilato.sqlite'));
+    expect(c.uploadsDir).toBe(path.resolve('data', 'uploads'));
+    expect(c.seedDemo).toBe(true);
+  });
+
+  it('when PORT is not a number, then start-up stops with a message naming PORT', () => {
+    expect(() => loadConfig({ PORT: 'eighty' })).toThrow(ConfigError);
+    expect(() => loadConfig({ PORT: 'eighty' })).toThrow(/PORT: must be a number/);
+    expect(() => loadConfig({ PORT: '70000' })).toThrow(/PORT: must be between 1 and 65535/);
+  });
+
+  it('when SEED_DEMO or SMTP_URL are malformed, then each is named', () => {
+    expect(() => loadConfig({ SEED_DEMO: 'maybe', SMTP_URL: 'mail.local' })).toThrow(/SEED_DEMO[\s\S]*SMTP_URL|SMTP_URL[\s\S]*SEED_DEMO/);
+  });
+
+  it('when SEED_DEMO=false, then demo seeding is off', () => {
+    expect(loadConfig({ SEED_DEMO: 'false' }).seedDemo).toBe(false);
+  });
+});
+
+describe('database', () => {
+  let dir: string;
+  beforeEach(() => {
+    dir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-db-'));
+  });
+  afterEach(() => fs.rmSync(dir, { recursive: true, force: true }));
+
+  it('when a file database opens, then it runs in WAL mode with a busy timeout and foreign keys on', async () => {
+    const ds = await openDatabase(path.join(dir, 'dilato.sqlite'));
+    const db = rawDatabase(ds);
+    expect(db.pragma('journal_mode', { simple: true })).toBe('wal');
+    expect(Number(db.pragma('busy_timeout', { simple: true }))).toBeGreaterThanOrEqual(5000);
+    expect(db.pragma('foreign_keys', { simple: true })).toBe(1);
+    await ds.destroy();
+  });
+
+  it('when the demo seed runs twice, then the four demo users exist once each', async () => {
+    const file = path.join(dir, 'dilato.sqlite');
+    const first = await openDatabase(file);
+    expect((await seed(first, { demo: true })).demoUsers).toBe(4);
+    await first.destroy();
+    const second = await openDatabase(file);
+    expect((await seed(second, { demo: true })).demoUsers).toBe(0);
+    expect(rawDatabase(second).prepare('SELECT count(*) AS n FROM app_user').get()).toEqual({ n: 4 });
+    await second.destroy();
+  });
+
+  it('when demo seeding is off, then no demo accounts exist', async () => {
+    const ds = await openDatabase(':memory:');
+    await seed(ds, { demo: false });
+    expect(rawDatabase(ds).prepare('SELECT count(*) AS n FROM app_user').get()).toEqual({ n: 0 });
+    await ds.destroy();
+  });
+});
+
+describe('serving the web app', () => {
+  it('when a deep link is asked, then the app page answers; unknown API routes still get JSON 404', async () => {
+    const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-web-'));
+    fs.writeFileSync(path.join(webDir, 'index.html'), '<!doctype html><title>Dilato</title><div id="root"></div>');
+    fs.writeFileSync(path.join(webDir, 'app.js'), 'console.log(1)');
+    const t = await createTestApp({ webDir });
+    for (const link of ['/', '/sign-in', '/alloys/123']) {
+      const res = await request(t.app).get(link).set('Host', HOST);
+      expect(res.status).toBe(200);
+      expect(res.text).toContain('<title>Dilato</title>');
+    }
+    const asset = await request(t.app).get('/app.js').set('Host', HOST);
+    expect(asset.text).toBe('console.log(1)');
+    const api = await request(t.app).get('/api/alloys-nope').set('Host', HOST);
+    expect(api.status).toBe(404);
+    expect(api.body.error.code).toBe('not_found');
+    await t.close();
+    fs.rmSync(webDir, { recursive: true, force: true });
+  });
+});

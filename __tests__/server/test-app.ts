@@ -1,0 +1,63 @@
+import request from 'supertest';
+import type { DataSource } from 'typeorm';
+import { createApp, type AppOptions } from '../../server/app';
+import { openDatabase } from '../../server/db/data-source';
+import { DEMO_PASSWORD, DEMO_USERS } from '../../server/seed/demo-users';
+import { seed } from '../../server/seed/seed';
+import type { Role } from '../../shared/schemas/auth';
+
+export const HOST = 'dilato.test';
+export const ORIGIN = `http://${HOST}`;
+
+export interface TestApp {
+  app: ReturnType<typeof createApp>;
+  dataSource: DataSource;
+  close: () => Promise<void>;
+}
+
+/** A real app on a real, empty in-memory SQLite database, with the demo users seeded. */
+export async function createTestApp(options: AppOptions & { demo?: boolean } = {}): Promise<TestApp> {
+  const dataSource = await openDatabase(':memory:');
+  await seed(dataSource, { demo: options.demo ?? true });
+  const app = createApp(dataSource, options);
+  return { app, dataSource, close: () => dataSource.destroy() };
+}
+
+type Method = 'get' | 'post' | 'patch' | 'put' | 'delete';
+
+/** A cookie-keeping client that speaks as a browser on Dilato's own origin would. */
+export function client(app: TestApp['app']) {
+  const agent = request.agent(app);
+  const send = (method: Method, url: string) => agent[method](url).set('Host', HOST).set('Origin', ORIGIN);
+  return {
+    agent,
+    get: (url: string) => send('get', url),
+    post: (url: string) => send('post', url),
+    patch: (url: string) => send('patch', url),
+    put: (url: string) => send('put', url),
+    delete: (url: string) => send('delete', url),
+  };
+}
+
+export function demoEmail(role: Role): string {
+  const user = DEMO_USERS.find((u) => u.role === role);
+  if (!user) throw new Error(`no demo user for ${role}`);
+  return user.email;
+}
+
+/** A client already signed in as the demo user of the role. */
+export async function signedIn(app: TestApp['app'], role: Role) {
+  const c = client(app);
+  const res = await c.post('/api/auth/sign-in').send({ email: demoEmail(role), password: DEMO_PASSWORD });
+  if (res.status !== 200) throw new Error(`sign-in as ${role} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return c;
+}
+
+export function expectErrorShape(body: unknown, code: string) {
+  expect(body).toEqual({
+    error: expect.objectContaining({ code, message: expect.any(String) }),
+  });
+  const error = (body as { error: Record<string, unknown> }).error;
+  expect(Object.keys(error).every((k) => ['code', 'message', 'fields'].includes(k))).toBe(true);
+  expect(error.code).toMatch(/^[a-z][a-z0-9_]*$/);
+}

@@ -1,0 +1,64 @@
+import express from 'express';
+import helmet from 'helmet';
+import type { DataSource } from 'typeorm';
+import { authRouter } from './auth/auth.router';
+import { AuthService } from './auth/auth.service';
+import { createLucia } from './auth/lucia';
+import { loadSession } from './auth/session';
+import { DEFAULT_SIGN_IN_LIMITS, type SignInLimits } from './auth/sign-in-limits';
+import { apiNotFound, errorHandler } from './http/error-handler';
+import { requireSameOrigin } from './http/same-origin';
+import { UsersRepository } from './users/users.repository';
+import { usersRouter } from './users/users.router';
+import { UsersService } from './users/users.service';
+import { webApp } from './web/web-app';
+
+export interface AppOptions {
+  webDir?: string;
+  publicUrl?: string;
+  trustProxy?: boolean;
+  signInLimits?: SignInLimits;
+}
+
+/** Builds the whole Express app on an open DataSource without listening (tests use it directly). */
+export function createApp(dataSource: DataSource, options: AppOptions = {}) {
+  const auth = createLucia(dataSource);
+  const usersRepository = new UsersRepository(dataSource);
+  const authService = new AuthService(usersRepository, auth);
+  const usersService = new UsersService(usersRepository, auth);
+
+  const app = express();
+  app.disable('x-powered-by');
+  if (options.trustProxy) app.set('trust proxy', 1);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // react-native-web writes its styles into a <style> tag at run time.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'font-src': ["'self'", 'data:'],
+          // Left to the proxy that terminates HTTPS; on plain HTTP it would break the app.
+          'upgrade-insecure-requests': null,
+        },
+      },
+    }),
+  );
+
+  const api = express.Router();
+  api.use(express.json({ limit: '1mb' }));
+  api.use(requireSameOrigin(options.publicUrl));
+  api.use(loadSession(auth));
+  api.get('/health', (_req, res) => {
+    res.json({ status: 'ok' });
+  });
+  api.use('/auth', authRouter(auth, authService, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS));
+  api.use('/users', usersRouter(usersService));
+  api.use(apiNotFound);
+  api.use(errorHandler);
+  app.use('/api', api);
+
+  if (options.webDir) app.use(webApp(options.webDir));
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,30 @@
+import { Router } from 'express';
+import { signInSchema } from '../../shared/schemas/auth';
+import { parseBody } from '../http/validate';
+import type { AuthService } from './auth.service';
+import type { Auth } from './lucia';
+import { currentUser, writeSessionCookie } from './session';
+import { signInLimiters, type SignInLimits } from './sign-in-limits';
+
+export function authRouter(auth: Auth, service: AuthService, limits: SignInLimits): Router {
+  const router = Router();
+
+  router.post('/sign-in', ...signInLimiters(limits), async (req, res) => {
+    const input = parseBody(signInSchema, req.body);
+    const { user, sessionId } = await service.signIn(input);
+    writeSessionCookie(auth, req, res, sessionId);
+    res.json({ user });
+  });
+
+  router.post('/sign-out', async (req, res) => {
+    if (req.sessionId) await service.signOut(req.sessionId);
+    writeSessionCookie(auth, req, res, null);
+    res.status(204).end();
+  });
+
+  router.get('/me', (req, res) => {
+    res.json({ user: currentUser(req) });
+  });
+
+  return router;
+}

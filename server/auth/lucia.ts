@@ -1,0 +1,37 @@
+import { BetterSqlite3Adapter } from '@lucia-auth/adapter-sqlite';
+import { Lucia, TimeSpan } from 'lucia';
+import type { DataSource } from 'typeorm';
+import { rawDatabase } from '../db/data-source';
+import type { Role } from '../../shared/schemas/auth';
+
+interface UserColumns {
+  email: string;
+  name: string;
+  role: Role;
+  active: number | boolean;
+}
+
+export function createLucia(dataSource: DataSource) {
+  const adapter = new BetterSqlite3Adapter(rawDatabase(dataSource), { user: 'app_user', session: 'user_session' });
+  return new Lucia(adapter, {
+    sessionExpiresIn: new TimeSpan(14, 'd'),
+    sessionCookie: {
+      name: 'dilato_session',
+      // Secure is decided per request (HTTPS or not) where the cookie is written.
+      attributes: { sameSite: 'lax', secure: false },
+    },
+    getUserAttributes: (columns) => {
+      const c = columns as unknown as UserColumns;
+      return { email: c.email, name: c.name, role: c.role, active: Boolean(c.active) };
+    },
+  });
+}
+
+export type Auth = ReturnType<typeof createLucia>;
+
+declare module 'lucia' {
+  interface Register {
+    Lucia: Auth;
+    DatabaseUserAttributes: UserColumns;
+  }
+}

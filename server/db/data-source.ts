@@ -1,0 +1,38 @@
+import 'reflect-metadata';
+import { DataSource } from 'typeorm';
+import { User } from '../users/user.entity';
+import { UsersAndSessions1764600000000 } from './migrations/1764600000000-users-and-sessions';
+
+export const ENTITIES = [User];
+export const MIGRATIONS = [UsersAndSessions1764600000000];
+
+/** `database` is a file path, or ':memory:' for tests. */
+export function createDataSource(database: string): DataSource {
+  return new DataSource({
+    type: 'better-sqlite3',
+    database,
+    entities: ENTITIES,
+    migrations: MIGRATIONS,
+    synchronize: false,
+    migrationsRun: false,
+    enableWAL: database !== ':memory:',
+    timeout: 5000,
+    prepareDatabase: (db: { pragma: (sql: string) => unknown }) => {
+      db.pragma('foreign_keys = ON');
+      db.pragma('busy_timeout = 5000');
+    },
+  });
+}
+
+/** Opens the database and brings its schema up to date. */
+export async function openDatabase(database: string): Promise<DataSource> {
+  const dataSource = createDataSource(database);
+  await dataSource.initialize();
+  await dataSource.runMigrations({ transaction: 'each' });
+  return dataSource;
+}
+
+/** The raw better-sqlite3 handle under TypeORM, shared with lucia's session adapter. */
+export function rawDatabase(dataSource: DataSource): import('better-sqlite3').Database {
+  return (dataSource.driver as unknown as { databaseConnection: import('better-sqlite3').Database }).databaseConnection;
+}

@@ -1,0 +1,44 @@
+import fs from 'node:fs';
+import type { Server } from 'node:http';
+import { createApp } from './app';
+import { ConfigError, loadConfig } from './config';
+import { openDatabase } from './db/data-source';
+import { seed } from './seed/seed';
+
+async function main() {
+  const startedAt = Date.now();
+  const config = loadConfig();
+  fs.mkdirSync(config.uploadsDir, { recursive: true });
+
+  const dataSource = await openDatabase(config.databasePath);
+  const report = await seed(dataSource, { demo: config.seedDemo });
+  const app = createApp(dataSource, {
+    webDir: config.webDir,
+    publicUrl: config.publicUrl,
+    trustProxy: config.trustProxy,
+  });
+
+  const server: Server = app.listen(config.port, () => {
+    console.log(
+      `[dilato] listening on http://localhost:${config.port} (data in ${config.dataDir}; ` +
+        `demo users added: ${report.demoUsers}; ready in ${Date.now() - startedAt} ms)`,
+    );
+  });
+
+  const stop = () => {
+    server.close(() => {
+      void dataSource.destroy().finally(() => process.exit(0));
+    });
+  };
+  process.on('SIGTERM', stop);
+  process.on('SIGINT', stop);
+}
+
+main().catch((err) => {
+  if (err instanceof ConfigError) {
+    console.error(err.message);
+  } else {
+    console.error('[dilato] could not start:', err);
+  }
+  process.exit(1);
+});
