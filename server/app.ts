@@ -12,8 +12,18 @@ import { UsersRepository } from './users/users.repository';
 import { usersRouter } from './users/users.router';
 import { UsersService } from './users/users.service';
 import { webApp } from './web/web-app';
+import { catalogueRouter } from './catalogue/catalogue.router';
+import { CatalogueStore } from './catalogue/catalogue.repository';
+import { CatalogueService } from './catalogue/catalogue.service';
+import { datasheetsRouter } from './datasheets/datasheets.router';
+import { DatasheetsService } from './datasheets/datasheets.service';
+import { FlexPartsRepository } from './flex-parts/flex-parts.repository';
+import { flexPartsRouter } from './flex-parts/flex-parts.router';
+import { FlexPartsService } from './flex-parts/flex-parts.service';
 
 export interface AppOptions {
+  /** Where uploaded data sheets are kept. */
+  uploadsDir: string;
   webDir?: string;
   publicUrl?: string;
   trustProxy?: boolean;
@@ -21,11 +31,15 @@ export interface AppOptions {
 }
 
 /** Builds the whole Express app on an open DataSource without listening (tests use it directly). */
-export function createApp(dataSource: DataSource, options: AppOptions = {}) {
+export function createApp(dataSource: DataSource, options: AppOptions) {
   const auth = createLucia(dataSource);
   const usersRepository = new UsersRepository(dataSource);
   const authService = new AuthService(usersRepository, auth);
   const usersService = new UsersService(usersRepository, auth);
+  const catalogueStore = new CatalogueStore(dataSource);
+  const catalogueService = new CatalogueService(catalogueStore);
+  const datasheetsService = new DatasheetsService(catalogueStore, options.uploadsDir);
+  const flexPartsService = new FlexPartsService(new FlexPartsRepository(dataSource));
 
   const app = express();
   app.disable('x-powered-by');
@@ -54,6 +68,9 @@ export function createApp(dataSource: DataSource, options: AppOptions = {}) {
   });
   api.use('/auth', authRouter(auth, authService, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS));
   api.use('/users', usersRouter(usersService));
+  api.use('/flex-parts', flexPartsRouter(flexPartsService));
+  api.use(datasheetsRouter(datasheetsService, options.uploadsDir));
+  api.use(catalogueRouter(catalogueService));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

@@ -14,6 +14,7 @@ const envSchema = z.object({
     .default(8080),
   DATA_DIR: z.string().min(1, { error: 'must not be empty' }).default('./data'),
   SEED_DEMO: booleanFlag.default(true),
+  SEED_CATALOGUE: booleanFlag.default(true),
   SMTP_URL: z.url({ protocol: /^smtps?$/, error: 'must be an smtp:// or smtps:// URL' }).optional(),
   PUBLIC_URL: z.url({ protocol: /^https?$/, error: 'must be an http:// or https:// URL' }).optional(),
   TRUST_PROXY: booleanFlag.default(false),
@@ -27,6 +28,7 @@ export interface Config {
   uploadsDir: string;
   webDir: string;
   seedDemo: boolean;
+  seedCatalogue: boolean;
   smtpUrl?: string;
   publicUrl?: string;
   trustProxy: boolean;
@@ -53,6 +55,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     uploadsDir: path.join(dataDir, 'uploads'),
     webDir: path.resolve(e.WEB_DIR ?? 'dist'),
     seedDemo: e.SEED_DEMO,
+    seedCatalogue: e.SEED_CATALOGUE,
     smtpUrl: e.SMTP_URL,
     publicUrl: e.PUBLIC_URL,
     trustProxy: e.TRUST_PROXY,

@@ -11,8 +11,9 @@ async function main() {
   fs.mkdirSync(config.uploadsDir, { recursive: true });
 
   const dataSource = await openDatabase(config.databasePath);
-  const report = await seed(dataSource, { demo: config.seedDemo });
+  const report = await seed(dataSource, { demo: config.seedDemo, catalogue: config.seedCatalogue });
   const app = createApp(dataSource, {
+    uploadsDir: config.uploadsDir,
     webDir: config.webDir,
     publicUrl: config.publicUrl,
     trustProxy: config.trustProxy,
@@ -21,7 +22,7 @@ async function main() {
   const server: Server = app.listen(config.port, () => {
     console.log(
       `[dilato] listening on http://localhost:${config.port} (data in ${config.dataDir}; ` +
-        `demo users added: ${report.demoUsers}; ready in ${Date.now() - startedAt} ms)`,
+        `seeded: ${report.alloys} alloys, ${report.sources} sources, ${report.flexParts} flex parts, ${report.demoUsers} demo users; ready in ${Date.now() - startedAt} ms)`,
     );
   });
 

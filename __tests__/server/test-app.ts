@@ -1,3 +1,6 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { createApp, type AppOptions } from '../../server/app';
@@ -12,15 +15,30 @@ export const ORIGIN = `http://${HOST}`;
 export interface TestApp {
   app: ReturnType<typeof createApp>;
   dataSource: DataSource;
+  uploadsDir: string;
   close: () => Promise<void>;
 }
 
-/** A real app on a real, empty in-memory SQLite database, with the demo users seeded. */
-export async function createTestApp(options: AppOptions & { demo?: boolean } = {}): Promise<TestApp> {
+type TestOptions = Partial<AppOptions> & { demo?: boolean; catalogue?: boolean };
+
+/**
+ * A real app on a real in-memory SQLite database, migrated and seeded like a first start
+ * (reference catalogue and demo shop), with its own uploads folder.
+ */
+export async function createTestApp(options: TestOptions = {}): Promise<TestApp> {
   const dataSource = await openDatabase(':memory:');
-  await seed(dataSource, { demo: options.demo ?? true });
-  const app = createApp(dataSource, options);
-  return { app, dataSource, close: () => dataSource.destroy() };
+  await seed(dataSource, { demo: options.demo ?? true, catalogue: options.catalogue ?? true });
+  const uploadsDir = options.uploadsDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-uploads-'));
+  const app = createApp(dataSource, { ...options, uploadsDir });
+  return {
+    app,
+    dataSource,
+    uploadsDir,
+    close: async () => {
+      await dataSource.destroy();
+      fs.rmSync(uploadsDir, { recursive: true, force: true });
+    },
+  };
 }
 
 type Method = 'get' | 'post' | 'patch' | 'put' | 'delete';

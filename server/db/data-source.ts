@@ -1,10 +1,13 @@
 import 'reflect-metadata';
 import { DataSource } from 'typeorm';
+import { Alloy, AlloyRevision, AlloyVersion, Datasheet, PropertyPoint, Source } from '../catalogue/catalogue.entities';
+import { FlexPartRow } from '../flex-parts/flex-part.entity';
 import { User } from '../users/user.entity';
 import { UsersAndSessions1764600000000 } from './migrations/1764600000000-users-and-sessions';
+import { Catalogue1764600100000 } from './migrations/1764600100000-catalogue';
 
-export const ENTITIES = [User];
-export const MIGRATIONS = [UsersAndSessions1764600000000];
+export const ENTITIES = [User, Source, Alloy, AlloyVersion, PropertyPoint, AlloyRevision, Datasheet, FlexPartRow];
+export const MIGRATIONS = [UsersAndSessions1764600000000, Catalogue1764600100000];
 
 /** `database` is a file path, or ':memory:' for tests. */
 export function createDataSource(database: string): DataSource {

@@ -1,13 +1,28 @@
 import type { DataSource } from 'typeorm';
+import { seedCatalogue, seedFlexParts } from './catalogue-seed';
 import { seedDemoUsers } from './demo-users';
+
+export interface SeedOptions {
+  /** The invented shop: its people and flex parts. */
+  demo: boolean;
+  /** The reference catalogue of published alloy data (prices in it are demo values). */
+  catalogue?: boolean;
+}
 
 export interface SeedReport {
   demoUsers: number;
+  sources: number;
+  alloys: number;
+  flexParts: number;
 }
 
-/** Runs every seed step; each is idempotent, so this is safe on every start. */
-export async function seed(dataSource: DataSource, options: { demo: boolean }): Promise<SeedReport> {
-  const report: SeedReport = { demoUsers: 0 };
-  if (options.demo) report.demoUsers = await seedDemoUsers(dataSource);
+/** Runs every seed step; each adds only what is missing, so this is safe on every start. */
+export async function seed(dataSource: DataSource, options: SeedOptions): Promise<SeedReport> {
+  const report: SeedReport = { demoUsers: 0, sources: 0, alloys: 0, flexParts: 0 };
+  if (options.catalogue ?? true) Object.assign(report, await seedCatalogue(dataSource));
+  if (options.demo) {
+    report.demoUsers = await seedDemoUsers(dataSource);
+    report.flexParts = await seedFlexParts(dataSource);
+  }
   return report;
 }

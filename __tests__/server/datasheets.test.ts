@@ -1,0 +1,185 @@
+import { createHash } from 'node:crypto';
+import fs from 'node:fs';
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
+import type { AlloySummary } from '../../shared/schemas/alloy';
+import { ROLES } from '../../shared/schemas/auth';
+import { client, createTestApp, expectErrorShape, HOST, ORIGIN, signedIn, type TestApp } from './test-app';
+
+let t: TestApp;
+beforeEach(async () => {
+  t = await createTestApp();
+});
+afterEach(() => t.close());
+
+/** A small but well-formed PDF: the header is what the server checks. */
+const PDF = Buffer.from('%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n');
+
+async function alloyId(uns = 'S32100'): Promise<string> {
+  const fab = await signedIn(t.app, 'fabricator');
+  return (await fab.get('/api/alloys').query({ search: uns })).body.items.find((a: AlloySummary) => a.uns === uns).id;
+}
+
+const storedFiles = () => fs.readdirSync(t.uploadsDir);
+async function datasheetRows(): Promise<number> {
+  const rows = await t.dataSource.query('SELECT count(*) AS n FROM datasheet');
+  return rows[0].n;
+}
+
+describe('uploading a data sheet', () => {
+  it('when an engineer uploads a PDF, then it is stored under a random name with its sha256, and anyone signed in can download it', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const id = await alloyId();
+    const res = await eng.post(`/api/alloys/${id}/datasheets`).attach('file', PDF, { filename: '../../etc/321 data sheet.pdf', contentType: 'application/pdf' });
+    expect(res.status).toBe(201);
+    const sheet = res.body.datasheet;
+    expect(sheet.originalName).toBe('321 data sheet.pdf');
+    expect(sheet.sizeBytes).toBe(PDF.length);
+    expect(sheet.sha256).toBe(createHash('sha256').update(PDF).digest('hex'));
+
+    const files = storedFiles();
+    expect(files).toHaveLength(1);
+    expect(files[0]).toMatch(/^[0-9a-f]{32}\.pdf$/);
+    expect(fs.readFileSync(`${t.uploadsDir}/${files[0]}`).equals(PDF)).toBe(true);
+
+    const fab = await signedIn(t.app, 'fabricator');
+    const download = await fab.get(`/api/datasheets/${sheet.id}`).buffer(true).parse((r, cb) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(download.status).toBe(200);
+    expect(download.headers['content-type']).toBe('application/pdf');
+    expect(download.headers['content-disposition']).toBe('attachment; filename="321 data sheet.pdf"');
+    expect((download.body as Buffer).equals(PDF)).toBe(true);
+
+    const detail = (await fab.get(`/api/alloys/${id}`)).body.alloy;
+    expect(detail.datasheets.map((d: { id: string }) => d.id)).toEqual([sheet.id]);
+    const revisions = (await fab.get(`/api/alloys/${id}/revisions`)).body.items;
+    expect(revisions[0]).toMatchObject({ action: 'datasheet_added', note: '321 data sheet.pdf' });
+  });
+
+  it('when a name holds quotes or non-Latin letters, then the download header stays safe', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const res = await eng.post(`/api/alloys/${await alloyId()}/datasheets`).attach('file', PDF, { filename: 'Prüfbericht "321".pdf' });
+    const download = await eng.get(`/api/datasheets/${res.body.datasheet.id}`);
+    const header = String(download.headers['content-disposition']);
+    expect(header).toMatch(/^attachment; filename="Pr\?fbericht \\"321\\".pdf"; filename\*=UTF-8''Pr%C3%BCfbericht%20%22321%22.pdf$/);
+  });
+
+  it('when the file is not a PDF by content, even if named and typed as one, then 415 and nothing is kept', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const res = await eng
+      .post(`/api/alloys/${await alloyId()}/datasheets`)
+      .attach('file', Buffer.from('MZ\x90\x00 this is a program, not a data sheet'), { filename: 'sheet.pdf', contentType: 'application/pdf' });
+    expect(res.status).toBe(415);
+    expectErrorShape(res.body, 'not_a_pdf');
+    expect(storedFiles()).toEqual([]);
+    expect(await datasheetRows()).toBe(0);
+  });
+
+  it('when the file is empty or shorter than the PDF header, then it is refused', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const res = await eng.post(`/api/alloys/${await alloyId()}/datasheets`).attach('file', Buffer.from('%PD'), { filename: 'tiny.pdf' });
+    expect(res.status).toBe(415);
+    expect(storedFiles()).toEqual([]);
+  });
+
+  it('when the file is over 25 MB, then 413 in the error shape and nothing is kept', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const big = Buffer.concat([Buffer.from('%PDF-1.7\n'), Buffer.alloc(25 * 1024 * 1024 + 10, 0x20)]);
+    const res = await eng.post(`/api/alloys/${await alloyId()}/datasheets`).attach('file', big, { filename: 'huge.pdf' });
+    expect(res.status).toBe(413);
+    expectErrorShape(res.body, 'too_large');
+    expect(storedFiles()).toEqual([]);
+    expect(await datasheetRows()).toBe(0);
+  });
+
+  it('when the field is not "file" or no file is sent, then 400', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const id = await alloyId();
+    const wrongField = await eng.post(`/api/alloys/${id}/datasheets`).attach('document', PDF, { filename: 'a.pdf' });
+    expect(wrongField.status).toBe(400);
+    expectErrorShape(wrongField.body, 'invalid_upload');
+    const none = await eng.post(`/api/alloys/${id}/datasheets`).field('note', 'no file');
+    expect(none.status).toBe(400);
+    expect(storedFiles()).toEqual([]);
+  });
+
+  it('when the alloy does not exist, then 404 and the stored file is removed again', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const res = await eng.post('/api/alloys/no-such-alloy/datasheets').attach('file', PDF, { filename: 'a.pdf' });
+    expect(res.status).toBe(404);
+    expect(storedFiles()).toEqual([]);
+    expect(await datasheetRows()).toBe(0);
+  });
+
+  it('when the upload is cut off part-way, then no file and no row are left', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const cookie = (await eng.get('/api/auth/me')).request.getHeader?.('cookie') as string | undefined;
+    const id = await alloyId();
+    const server = http.createServer(t.app).listen(0);
+    const { port } = server.address() as AddressInfo;
+    const boundary = 'dilatoBoundary';
+    await new Promise<void>((resolve) => {
+      const req = http.request({
+        port,
+        method: 'POST',
+        path: `/api/alloys/${id}/datasheets`,
+        headers: {
+          Host: HOST,
+          Origin: ORIGIN,
+          Cookie: String(cookie),
+          'Content-Type': `multipart/form-data; boundary=${boundary}`,
+          'Content-Length': String(10 * 1024 * 1024),
+        },
+      });
+      req.on('error', () => resolve());
+      req.write(`--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="cut.pdf"\r\nContent-Type: application/pdf\r\n\r\n`);
+      req.write(Buffer.concat([Buffer.from('%PDF-1.4\n'), Buffer.alloc(256 * 1024, 0x41)]));
+      setTimeout(() => {
+        req.destroy();
+        resolve();
+      }, 200);
+    });
+    await new Promise((r) => setTimeout(r, 300));
+    server.close();
+    expect(storedFiles()).toEqual([]);
+    expect(await datasheetRows()).toBe(0);
+  });
+});
+
+describe('who may upload and download', () => {
+  for (const role of ROLES) {
+    const allowed = role === 'engineer' || role === 'admin';
+    it(`when a ${role} uploads, then ${allowed ? '201' : '403 and nothing is stored'}`, async () => {
+      const c = await signedIn(t.app, role);
+      const res = await c.post(`/api/alloys/${await alloyId()}/datasheets`).attach('file', PDF, { filename: 'a.pdf' });
+      expect(res.status).toBe(allowed ? 201 : 403);
+      expect(storedFiles()).toHaveLength(allowed ? 1 : 0);
+    });
+  }
+
+  it('when anonymous uploads or downloads, then 401', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const sheet = (await eng.post(`/api/alloys/${await alloyId()}/datasheets`).attach('file', PDF, { filename: 'a.pdf' })).body.datasheet;
+    const anon = client(t.app);
+    expect((await anon.get(`/api/datasheets/${sheet.id}`)).status).toBe(401);
+    expect((await anon.post(`/api/alloys/${await alloyId()}/datasheets`).attach('file', PDF, { filename: 'a.pdf' })).status).toBe(401);
+  });
+
+  it('when the alloy was never published, then only engineers and admins can download its data sheet', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const src = (await eng.get('/api/sources')).body.items[0].id;
+    const draft = await eng.post('/api/alloys').send({
+      designation: 'Alloy 999', uns: 'N09999', family: 'nickel_chromium', densityKgM3: 8300, densitySourceId: src,
+      maxContinuousC: 1000, maxIntermittentC: 950, limitsSourceId: src, pricePerKg: 30, currency: 'EUR', priceSetOn: '2026-11-20',
+      referenceTempC: 20, cte: [{ tempC: 100, meanUmPerMK: 13, sourceId: src }, { tempC: 900, meanUmPerMK: 16, sourceId: src }], modulus: [], yield: [],
+    });
+    expect(draft.status).toBe(201);
+    const sheet = (await eng.post(`/api/alloys/${draft.body.alloy.id}/datasheets`).attach('file', PDF, { filename: 'draft.pdf' })).body.datasheet;
+    expect((await eng.get(`/api/datasheets/${sheet.id}`)).status).toBe(200);
+    const fab = await signedIn(t.app, 'fabricator');
+    expect((await fab.get(`/api/datasheets/${sheet.id}`)).status).toBe(404);
+  });
+});

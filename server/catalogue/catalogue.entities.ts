@@ -1,0 +1,102 @@
+import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import type { AlloyFamily, AlloyStatus } from '../../shared/schemas/alloy';
+
+@Entity({ name: 'source' })
+export class Source {
+  @PrimaryColumn('varchar') id: string;
+  /** Stable handle for seeded sources and CSV files; null for sources added by hand. */
+  @Column('varchar', { nullable: true, unique: true }) key: string | null;
+  @Column('varchar') kind: 'standard' | 'handbook' | 'datasheet' | 'memory';
+  @Column('varchar') title: string;
+  @Column('varchar', { default: '' }) issuer: string;
+  @Column('varchar', { default: '' }) edition: string;
+  @Column('varchar', { nullable: true }) url: string | null;
+  @Column('varchar', { default: '' }) note: string;
+  @Column('varchar', { name: 'datasheet_id', nullable: true }) datasheetId: string | null;
+  @CreateDateColumn({ name: 'created_at', type: 'datetime' }) createdAt: Date;
+}
+
+@Entity({ name: 'alloy' })
+export class Alloy {
+  @PrimaryColumn('varchar') id: string;
+  @Column('varchar', { unique: true }) uns: string;
+  @Column('varchar') status: AlloyStatus;
+  @Column('varchar', { name: 'published_version_id', nullable: true }) publishedVersionId: string | null;
+  @Column('varchar', { name: 'draft_version_id', nullable: true }) draftVersionId: string | null;
+  @CreateDateColumn({ name: 'created_at', type: 'datetime' }) createdAt: Date;
+  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' }) updatedAt: Date;
+}
+
+export interface WarningRange {
+  fromC: number;
+  toC: number;
+  code: string;
+  message: string;
+}
+
+@Entity({ name: 'alloy_version' })
+@Index(['alloyId', 'version'], { unique: true })
+export class AlloyVersion {
+  @PrimaryColumn('varchar') id: string;
+  @Column('varchar', { name: 'alloy_id' }) alloyId: string;
+  @Column('integer') version: number;
+  @Column('varchar') state: 'draft' | 'published' | 'superseded';
+  @Column('varchar') designation: string;
+  @Column('varchar') uns: string;
+  @Column('varchar') family: AlloyFamily;
+  @Column('real', { name: 'density_kg_m3' }) densityKgM3: number;
+  @Column('varchar', { name: 'density_source_id' }) densitySourceId: string;
+  @Column('real', { name: 'max_continuous_c' }) maxContinuousC: number;
+  @Column('real', { name: 'max_intermittent_c' }) maxIntermittentC: number;
+  @Column('varchar', { name: 'limits_source_id' }) limitsSourceId: string;
+  @Column('real', { name: 'price_per_kg' }) pricePerKg: number;
+  @Column('varchar') currency: string;
+  @Column('varchar', { name: 'price_set_on' }) priceSetOn: string;
+  @Column('boolean', { name: 'price_is_demo', default: false }) priceIsDemo: boolean;
+  @Column('real', { name: 'reference_temp_c' }) referenceTempC: number;
+  @Column('text', { default: '' }) notes: string;
+  @Column('simple-json', { name: 'warning_ranges' }) warningRanges: WarningRange[];
+  @Column('varchar', { name: 'created_by', nullable: true }) createdBy: string | null;
+  @CreateDateColumn({ name: 'created_at', type: 'datetime' }) createdAt: Date;
+  @Column('varchar', { name: 'published_by', nullable: true }) publishedBy: string | null;
+  @Column('datetime', { name: 'published_at', nullable: true }) publishedAt: Date | null;
+}
+
+export type PropertyKind = 'cte' | 'modulus' | 'yield';
+
+@Entity({ name: 'property_point' })
+@Index(['versionId', 'kind', 'tempC'], { unique: true })
+export class PropertyPoint {
+  @PrimaryColumn('varchar') id: string;
+  @Column('varchar', { name: 'version_id' }) versionId: string;
+  @Column('varchar') kind: PropertyKind;
+  @Column('real', { name: 'temp_c' }) tempC: number;
+  /** µm/m·K for cte, GPa for modulus, MPa for yield. */
+  @Column('real') value: number;
+  @Column('varchar', { name: 'source_id' }) sourceId: string;
+}
+
+@Entity({ name: 'alloy_revision' })
+export class AlloyRevision {
+  @PrimaryColumn('varchar') id: string;
+  @Column('varchar', { name: 'alloy_id' }) alloyId: string;
+  @Column('integer', { nullable: true }) version: number | null;
+  @Column('varchar') action: 'created' | 'edited' | 'published' | 'retired' | 'restored' | 'datasheet_added';
+  @Column('varchar', { name: 'user_id', nullable: true }) userId: string | null;
+  @Column('varchar', { name: 'user_name', nullable: true }) userName: string | null;
+  @Column('varchar', { default: '' }) note: string;
+  @Column('simple-json') diff: { path: string; before: unknown; after: unknown }[];
+  @Column('datetime') at: Date;
+}
+
+@Entity({ name: 'datasheet' })
+export class Datasheet {
+  @PrimaryColumn('varchar') id: string;
+  @Column('varchar', { name: 'alloy_id' }) alloyId: string;
+  @Column('varchar', { name: 'original_name' }) originalName: string;
+  @Column('varchar', { name: 'stored_name', unique: true }) storedName: string;
+  @Column('integer', { name: 'size_bytes' }) sizeBytes: number;
+  @Column('varchar') sha256: string;
+  @Column('varchar', { name: 'uploaded_by', nullable: true }) uploadedBy: string | null;
+  @CreateDateColumn({ name: 'uploaded_at', type: 'datetime' }) uploadedAt: Date;
+}

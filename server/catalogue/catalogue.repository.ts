@@ -1,0 +1,111 @@
+import { In, type DataSource, type EntityManager } from 'typeorm';
+import {
+  Alloy,
+  AlloyRevision,
+  AlloyVersion,
+  Datasheet,
+  PropertyPoint,
+  Source,
+  type PropertyKind,
+} from './catalogue.entities';
+
+/** The only place catalogue rows are read and written. Bind it to a transaction's manager to write atomically. */
+export class CatalogueRepository {
+  constructor(private readonly m: EntityManager) {}
+
+  allAlloys() {
+    return this.m.find(Alloy);
+  }
+  findAlloy(id: string) {
+    return this.m.findOneBy(Alloy, { id });
+  }
+  findAlloyByUns(uns: string) {
+    return this.m.findOneBy(Alloy, { uns });
+  }
+  saveAlloy(alloy: Alloy) {
+    return this.m.save(Alloy, alloy);
+  }
+
+  findVersion(id: string) {
+    return this.m.findOneBy(AlloyVersion, { id });
+  }
+  findVersions(ids: string[]) {
+    return ids.length === 0 ? Promise.resolve([]) : this.m.findBy(AlloyVersion, { id: In(ids) });
+  }
+  findVersionByNumber(alloyId: string, version: number) {
+    return this.m.findOneBy(AlloyVersion, { alloyId, version });
+  }
+  async latestVersionNumber(alloyId: string): Promise<number> {
+    const row = await this.m
+      .createQueryBuilder(AlloyVersion, 'v')
+      .select('MAX(v.version)', 'max')
+      .where('v.alloy_id = :alloyId', { alloyId })
+      .getRawOne<{ max: number | null }>();
+    return row?.max ?? 0;
+  }
+  saveVersion(version: AlloyVersion) {
+    return this.m.save(AlloyVersion, version);
+  }
+
+  pointsFor(versionIds: string[]) {
+    return versionIds.length === 0
+      ? Promise.resolve([])
+      : this.m.find(PropertyPoint, { where: { versionId: In(versionIds) }, order: { tempC: 'ASC' } });
+  }
+  async replacePoints(versionId: string, kind: PropertyKind, points: PropertyPoint[]) {
+    await this.m.delete(PropertyPoint, { versionId, kind });
+    if (points.length > 0) await this.m.insert(PropertyPoint, points);
+  }
+
+  allSources() {
+    return this.m.find(Source, { order: { title: 'ASC' } });
+  }
+  findSources(ids: string[]) {
+    return ids.length === 0 ? Promise.resolve([]) : this.m.findBy(Source, { id: In(ids) });
+  }
+  findSourceByKey(key: string) {
+    return this.m.findOneBy(Source, { key });
+  }
+  saveSource(source: Source) {
+    return this.m.save(Source, source);
+  }
+
+  addRevision(revision: AlloyRevision) {
+    return this.m.save(AlloyRevision, revision);
+  }
+  revisionsFor(alloyId: string) {
+    return this.m
+      .createQueryBuilder(AlloyRevision, 'r')
+      .where('r.alloy_id = :alloyId', { alloyId })
+      .orderBy('r.at', 'DESC')
+      .addOrderBy('r.rowid', 'DESC')
+      .getMany();
+  }
+
+  saveDatasheet(sheet: Datasheet) {
+    return this.m.save(Datasheet, sheet);
+  }
+  datasheetsFor(alloyId: string) {
+    return this.m.find(Datasheet, { where: { alloyId }, order: { uploadedAt: 'DESC' } });
+  }
+  findDatasheet(id: string) {
+    return this.m.findOneBy(Datasheet, { id });
+  }
+
+  create<T extends object>(entity: new () => T, fields: Partial<T>): T {
+    return Object.assign(new entity(), fields) as T;
+  }
+}
+
+/** Hands out repositories: one on the shared connection for reads, one per transaction for writes. */
+export class CatalogueStore {
+  constructor(private readonly dataSource: DataSource) {}
+
+  read(): CatalogueRepository {
+    return new CatalogueRepository(this.dataSource.manager);
+  }
+
+  write<T>(work: (repo: CatalogueRepository) => Promise<T>): Promise<T> {
+    return this.dataSource.transaction((m) => work(new CatalogueRepository(m)));
+  }
+}

@@ -1,0 +1,360 @@
+import { randomUUID } from 'node:crypto';
+import { diffAlloy } from '../../shared/catalogue/alloy-diff';
+import { toAlloyData } from '../../shared/catalogue/to-alloy-data';
+import { prepareStrainCurve, uniformGrowthMm } from '../../shared/engine/expansion';
+import type { AlloyData } from '../../shared/engine/types';
+import type { PublicUser } from '../../shared/schemas/auth';
+import {
+  alloyInputSchema,
+  type AlloyDetail,
+  type AlloyInput,
+  type AlloyListQuery,
+  type AlloyPatch,
+  type AlloySummary,
+  type AlloyVersionView,
+  type RevisionView,
+  type SourceInput,
+  type SourceView,
+} from '../../shared/schemas/alloy';
+import { AppError } from '../http/app-error';
+import { fieldsFromZod } from '../http/validate';
+import { Alloy, AlloyRevision, AlloyVersion, PropertyPoint, Source, type PropertyKind } from './catalogue.entities';
+import type { CatalogueRepository, CatalogueStore } from './catalogue.repository';
+import { citedSourceIds, datasheetView, revisionView, sourceView, versionView } from './catalogue.views';
+
+export type Actor = (Pick<PublicUser, 'name' | 'role'> & { id: string | null }) | null;
+
+/** Who writes what the seed adds: full rights, no user row. */
+export const SEED_ACTOR: Actor = { id: null, name: 'Dilato seed', role: 'admin' };
+
+const EDITORS = new Set(['engineer', 'admin']);
+export const canEdit = (actor: Actor) => actor !== null && EDITORS.has(actor.role);
+
+/** The published data the calculator uses, with the version it came from. */
+export interface PublishedAlloy {
+  alloyId: string;
+  designation: string;
+  uns: string;
+  version: number;
+  versionId: string;
+  data: AlloyData;
+  currency: string;
+}
+
+const TABLE_VALUE: Record<PropertyKind, 'meanUmPerMK' | 'gpa' | 'mpa'> = { cte: 'meanUmPerMK', modulus: 'gpa', yield: 'mpa' };
+
+function growthPerMetreAt(v: AlloyVersionView, atC: number): number | null {
+  try {
+    return uniformGrowthMm(prepareStrainCurve(v), 1000, atC, 20);
+  } catch {
+    return null;
+  }
+}
+
+export class CatalogueService {
+  constructor(private readonly store: CatalogueStore) {}
+
+  // ---- reading ----
+
+  private async views(repo: CatalogueRepository, versionIds: (string | null)[]) {
+    const ids = versionIds.filter((id): id is string => id !== null);
+    const [versions, points] = await Promise.all([repo.findVersions(ids), repo.pointsFor(ids)]);
+    return new Map(versions.map((v) => [v.id, versionView(v, points)]));
+  }
+
+  /** The version a reader sees in lists: the published one, or for editors a never-published draft. */
+  private shownVersionId(alloy: Alloy, actor: Actor, includeDrafts: boolean): string | null {
+    if (alloy.publishedVersionId) return alloy.publishedVersionId;
+    return canEdit(actor) && includeDrafts ? alloy.draftVersionId : null;
+  }
+
+  async list(query: AlloyListQuery, actor: Actor): Promise<{ items: AlloySummary[]; total: number }> {
+    const repo = this.store.read();
+    const alloys = (await repo.allAlloys()).filter(
+      (a) => a.status !== 'retired' || (query.includeRetired && canEdit(actor)),
+    );
+    const shown = alloys
+      .map((alloy) => ({ alloy, versionId: this.shownVersionId(alloy, actor, query.includeDrafts) }))
+      .filter((x): x is { alloy: Alloy; versionId: string } => x.versionId !== null);
+    const views = await this.views(repo, shown.map((x) => x.versionId));
+
+    const needle = query.search?.toLowerCase().replace(/[\s-]/g, '');
+    let items: AlloySummary[] = shown.map(({ alloy, versionId }) => {
+      const v = views.get(versionId)!;
+      return {
+        id: alloy.id,
+        designation: v.designation,
+        uns: v.uns,
+        family: v.family,
+        status: alloy.status,
+        version: alloy.publishedVersionId ? views.get(alloy.publishedVersionId)?.version ?? null : null,
+        hasDraft: canEdit(actor) && alloy.draftVersionId !== null,
+        densityKgM3: v.densityKgM3,
+        maxContinuousC: v.maxContinuousC,
+        maxIntermittentC: v.maxIntermittentC,
+        pricePerKg: v.pricePerKg,
+        currency: v.currency,
+        priceIsDemo: v.priceIsDemo,
+        maxDataC: Math.max(...v.cte.map((p) => p.tempC)),
+        growthAtMmPerM: growthPerMetreAt(v, query.atC),
+      };
+    });
+    if (needle) {
+      items = items.filter((i) =>
+        [i.designation, i.uns].some((text) => text.toLowerCase().replace(/[\s-]/g, '').includes(needle)),
+      );
+    }
+    if (query.family) items = items.filter((i) => i.family === query.family);
+    if (query.minServiceC !== undefined) items = items.filter((i) => i.maxContinuousC >= query.minServiceC!);
+
+    const byName = (a: AlloySummary, b: AlloySummary) => a.designation.localeCompare(b.designation, 'en', { numeric: true });
+    const sorters: Record<AlloyListQuery['sort'], (a: AlloySummary, b: AlloySummary) => number> = {
+      designation: byName,
+      limit: (a, b) => b.maxContinuousC - a.maxContinuousC || byName(a, b),
+      expansion: (a, b) => (a.growthAtMmPerM ?? Infinity) - (b.growthAtMmPerM ?? Infinity) || byName(a, b),
+      price: (a, b) => a.pricePerKg - b.pricePerKg || byName(a, b),
+    };
+    items.sort(sorters[query.sort]);
+    const start = (query.page - 1) * query.pageSize;
+    return { items: items.slice(start, start + query.pageSize), total: items.length };
+  }
+
+  private async visibleAlloy(repo: CatalogueRepository, id: string, actor: Actor): Promise<Alloy> {
+    const alloy = await repo.findAlloy(id);
+    if (!alloy || (!alloy.publishedVersionId && !canEdit(actor))) throw AppError.notFound('There is no such alloy.');
+    return alloy;
+  }
+
+  async detail(id: string, actor: Actor): Promise<AlloyDetail> {
+    return this.detailIn(this.store.read(), id, actor);
+  }
+
+  private async detailIn(repo: CatalogueRepository, id: string, actor: Actor): Promise<AlloyDetail> {
+    const alloy = await this.visibleAlloy(repo, id, actor);
+    const draftId = canEdit(actor) ? alloy.draftVersionId : null;
+    const views = await this.views(repo, [alloy.publishedVersionId, draftId]);
+    const published = alloy.publishedVersionId ? views.get(alloy.publishedVersionId) ?? null : null;
+    const draft = draftId ? views.get(draftId) ?? null : null;
+    const sourceIds = [...new Set([published, draft].flatMap((v) => (v ? citedSourceIds(v) : [])))];
+    const [sources, sheets] = await Promise.all([repo.findSources(sourceIds), repo.datasheetsFor(alloy.id)]);
+    return {
+      id: alloy.id,
+      status: alloy.status,
+      published,
+      draft,
+      sources: sources.map(sourceView),
+      datasheets: sheets.map(datasheetView),
+    };
+  }
+
+  /** Any version by number: published and superseded ones for everyone, drafts for editors. */
+  async version(id: string, version: number, actor: Actor): Promise<AlloyVersionView> {
+    const repo = this.store.read();
+    await this.visibleAlloy(repo, id, actor);
+    const row = await repo.findVersionByNumber(id, version);
+    if (!row || (row.state === 'draft' && !canEdit(actor))) throw AppError.notFound('There is no such version.');
+    return versionView(row, await repo.pointsFor([row.id]));
+  }
+
+  async revisions(id: string, actor: Actor): Promise<RevisionView[]> {
+    const repo = this.store.read();
+    await this.visibleAlloy(repo, id, actor);
+    return (await repo.revisionsFor(id)).map(revisionView);
+  }
+
+  /** The change an admin reviews before publishing: the draft against the published version. */
+  async review(id: string, actor: Actor) {
+    const detail = await this.detail(id, actor);
+    if (!detail.draft) throw AppError.conflict('no_draft', 'This alloy has no draft to review.');
+    return { alloyId: id, published: detail.published, draft: detail.draft, diff: diffAlloy(stripMeta(detail.published), stripMeta(detail.draft)!) };
+  }
+
+  async publishedAlloy(id: string): Promise<PublishedAlloy> {
+    const repo = this.store.read();
+    const alloy = await repo.findAlloy(id);
+    if (!alloy?.publishedVersionId || alloy.status === 'retired') {
+      throw AppError.notFound('There is no published alloy with this id.');
+    }
+    const v = (await this.views(repo, [alloy.publishedVersionId])).get(alloy.publishedVersionId)!;
+    return {
+      alloyId: alloy.id,
+      designation: v.designation,
+      uns: v.uns,
+      version: v.version,
+      versionId: v.versionId,
+      data: toAlloyData(v),
+      currency: v.currency,
+    };
+  }
+
+  // ---- writing ----
+
+  private async checkSources(repo: CatalogueRepository, input: AlloyInput) {
+    const cited: [string, string][] = [
+      ['densitySourceId', input.densitySourceId],
+      ['limitsSourceId', input.limitsSourceId],
+      ...(['cte', 'modulus', 'yield'] as const).flatMap((table) =>
+        input[table].map((p, i) => [`${table}.${i}.sourceId`, p.sourceId] as [string, string]),
+      ),
+    ];
+    const found = new Set((await repo.findSources([...new Set(cited.map(([, id]) => id))])).map((s) => s.id));
+    const fields = Object.fromEntries(cited.filter(([, id]) => !found.has(id)).map(([path]) => [path, 'No such source']));
+    if (Object.keys(fields).length > 0) throw AppError.badRequest('unknown_source', 'Some values cite a source that does not exist.', fields);
+  }
+
+  private async checkUnsFree(repo: CatalogueRepository, uns: string, alloyId: string | null) {
+    const other = await repo.findAlloyByUns(uns);
+    if (other && other.id !== alloyId) {
+      throw AppError.conflict('uns_taken', `Another alloy already has UNS ${uns}.`, { uns: 'Another alloy already has this UNS number' });
+    }
+  }
+
+  private async writeVersionData(repo: CatalogueRepository, version: AlloyVersion, input: AlloyInput) {
+    Object.assign(version, {
+      designation: input.designation,
+      uns: input.uns,
+      family: input.family,
+      densityKgM3: input.densityKgM3,
+      densitySourceId: input.densitySourceId,
+      maxContinuousC: input.maxContinuousC,
+      maxIntermittentC: input.maxIntermittentC,
+      limitsSourceId: input.limitsSourceId,
+      pricePerKg: input.pricePerKg,
+      currency: input.currency,
+      priceSetOn: input.priceSetOn,
+      priceIsDemo: input.priceIsDemo,
+      referenceTempC: input.referenceTempC,
+      notes: input.notes,
+      warningRanges: input.warningRanges,
+    });
+    await repo.saveVersion(version);
+    for (const kind of ['cte', 'modulus', 'yield'] as const) {
+      const rows = (input[kind] as { tempC: number; sourceId: string }[]).map((p) =>
+        repo.create(PropertyPoint, {
+          id: randomUUID(),
+          versionId: version.id,
+          kind,
+          tempC: p.tempC,
+          value: (p as unknown as Record<string, number>)[TABLE_VALUE[kind]],
+          sourceId: p.sourceId,
+        }),
+      );
+      await repo.replacePoints(version.id, kind, rows);
+    }
+  }
+
+  private revision(repo: CatalogueRepository, alloyId: string, fields: Pick<AlloyRevision, 'action' | 'version' | 'note' | 'diff'>, actor: Actor) {
+    return repo.addRevision(
+      repo.create(AlloyRevision, { id: randomUUID(), alloyId, userId: actor?.id ?? null, userName: actor?.name ?? 'Dilato seed', at: new Date(), ...fields }),
+    );
+  }
+
+  async create(input: AlloyInput, actor: Actor, note = ''): Promise<AlloyDetail> {
+    return this.store.write(async (repo) => {
+      await this.checkUnsFree(repo, input.uns, null);
+      await this.checkSources(repo, input);
+      const alloy = repo.create(Alloy, { id: randomUUID(), uns: input.uns, status: 'draft', publishedVersionId: null, draftVersionId: null });
+      await repo.saveAlloy(alloy);
+      const version = repo.create(AlloyVersion, { id: randomUUID(), alloyId: alloy.id, version: 1, state: 'draft', createdBy: actor?.id ?? null, publishedAt: null, publishedBy: null });
+      await this.writeVersionData(repo, version, input);
+      alloy.draftVersionId = version.id;
+      await repo.saveAlloy(alloy);
+      await this.revision(repo, alloy.id, { action: 'created', version: 1, note, diff: diffAlloy(null, input) }, actor);
+      return this.detailIn(repo, alloy.id, actor);
+    });
+  }
+
+  /** Edits the open draft; on a published alloy with no draft, opens one beside the published version. */
+  async patch(id: string, patch: AlloyPatch, actor: Actor): Promise<AlloyDetail> {
+    return this.store.write(async (repo) => {
+      const alloy = await this.visibleAlloy(repo, id, actor);
+      const views = await this.views(repo, [alloy.draftVersionId, alloy.publishedVersionId]);
+      const base = views.get(alloy.draftVersionId ?? '') ?? views.get(alloy.publishedVersionId ?? '');
+      if (!base) throw AppError.notFound('There is no such alloy.');
+      const { note, ...changes } = patch;
+      const parsed = alloyInputSchema.safeParse({ ...stripMeta(base), ...changes });
+      if (!parsed.success) throw AppError.badRequest('invalid_input', 'Some values need attention.', fieldsFromZod(parsed.error));
+      const input = parsed.data;
+      const diff = diffAlloy(stripMeta(base), input);
+      if (diff.length === 0) throw AppError.badRequest('no_change', 'Nothing changed.');
+      await this.checkUnsFree(repo, input.uns, alloy.id);
+      await this.checkSources(repo, input);
+
+      let draft = alloy.draftVersionId ? await repo.findVersion(alloy.draftVersionId) : null;
+      if (!draft) {
+        draft = repo.create(AlloyVersion, {
+          id: randomUUID(),
+          alloyId: alloy.id,
+          version: (await repo.latestVersionNumber(alloy.id)) + 1,
+          state: 'draft',
+          createdBy: actor?.id ?? null,
+          publishedAt: null,
+          publishedBy: null,
+        });
+      }
+      await this.writeVersionData(repo, draft, input);
+      alloy.draftVersionId = draft.id;
+      alloy.uns = input.uns;
+      await repo.saveAlloy(alloy);
+      await this.revision(repo, alloy.id, { action: 'edited', version: draft.version, note: note ?? '', diff }, actor);
+      return this.detailIn(repo, alloy.id, actor);
+    });
+  }
+
+  async publish(id: string, actor: Actor, note = ''): Promise<AlloyDetail> {
+    return this.store.write(async (repo) => {
+      const alloy = await this.visibleAlloy(repo, id, actor);
+      if (!alloy.draftVersionId) throw AppError.conflict('no_draft', 'There is no draft to publish.');
+      const views = await this.views(repo, [alloy.draftVersionId, alloy.publishedVersionId]);
+      const draftView = views.get(alloy.draftVersionId)!;
+      const before = alloy.publishedVersionId ? views.get(alloy.publishedVersionId)! : null;
+
+      if (alloy.publishedVersionId) {
+        const old = (await repo.findVersion(alloy.publishedVersionId))!;
+        old.state = 'superseded';
+        await repo.saveVersion(old);
+      }
+      const draft = (await repo.findVersion(alloy.draftVersionId))!;
+      Object.assign(draft, { state: 'published', publishedAt: new Date(), publishedBy: actor?.id ?? null });
+      await repo.saveVersion(draft);
+      Object.assign(alloy, { publishedVersionId: draft.id, draftVersionId: null, status: 'published', uns: draft.uns });
+      await repo.saveAlloy(alloy);
+      await this.revision(repo, alloy.id, { action: 'published', version: draft.version, note, diff: diffAlloy(stripMeta(before), stripMeta(draftView)!) }, actor);
+      return this.detailIn(repo, alloy.id, actor);
+    });
+  }
+
+  async setRetired(id: string, retired: boolean, actor: Actor, note = ''): Promise<AlloyDetail> {
+    return this.store.write(async (repo) => {
+      const alloy = await this.visibleAlloy(repo, id, actor);
+      if (!alloy.publishedVersionId) throw AppError.conflict('never_published', 'Only a published alloy can be retired or restored.');
+      const next = retired ? 'retired' : 'published';
+      if (alloy.status === next) throw AppError.conflict('no_change', retired ? 'This alloy is already retired.' : 'This alloy is not retired.');
+      const before = alloy.status;
+      alloy.status = next;
+      await repo.saveAlloy(alloy);
+      await this.revision(repo, alloy.id, { action: retired ? 'retired' : 'restored', version: null, note, diff: [{ path: 'status', before, after: next }] }, actor);
+      return this.detailIn(repo, alloy.id, actor);
+    });
+  }
+
+  // ---- sources ----
+
+  async sources(): Promise<SourceView[]> {
+    return (await this.store.read().allSources()).map(sourceView);
+  }
+
+  async createSource(input: SourceInput, key: string | null = null): Promise<SourceView> {
+    return this.store.write(async (repo) => {
+      const source = repo.create(Source, { id: randomUUID(), key, kind: input.kind, title: input.title, issuer: input.issuer, edition: input.edition, url: input.url ?? null, note: input.note, datasheetId: null });
+      return sourceView(await repo.saveSource(source));
+    });
+  }
+}
+
+/** A version view without its bookkeeping, i.e. the alloy input it holds. */
+export function stripMeta(v: AlloyVersionView | null): AlloyInput | null {
+  if (!v) return null;
+  const { versionId: _a, version: _b, state: _c, createdAt: _d, createdBy: _e, publishedAt: _f, publishedBy: _g, ...input } = v;
+  return input;
+}

@@ -1,0 +1,42 @@
+import { Router, type RequestHandler } from 'express';
+import multer from 'multer';
+import { requireRole, requireSignedIn } from '../auth/session';
+import { AppError } from '../http/app-error';
+import type { DatasheetsService } from './datasheets.service';
+import { pdfStorage, tooLarge, type StoredFile } from './pdf-storage';
+
+function uploadOne(uploadsDir: string): RequestHandler {
+  // Browsers send file names as raw UTF-8 without a charset parameter.
+  const upload = multer({ storage: pdfStorage(uploadsDir), defParamCharset: 'utf8', limits: { files: 1, fields: 5, fieldSize: 10_000 } }).single('file');
+  return (req, res, next) => {
+    upload(req, res, (err: unknown) => {
+      if (!err) return next();
+      if (err instanceof AppError) return next(err);
+      const code = (err as { code?: string }).code;
+      if (code === 'LIMIT_FILE_SIZE') return next(tooLarge());
+      next(AppError.badRequest('invalid_upload', 'The upload could not be read; send one PDF in the field "file".', { file: 'Send one PDF in the field "file"' }));
+    });
+  };
+}
+
+/** POST /api/alloys/:id/datasheets (engineer, admin) and GET /api/datasheets/:id (anyone signed in). */
+export function datasheetsRouter(service: DatasheetsService, uploadsDir: string): Router {
+  const router = Router();
+
+  router.post('/alloys/:id/datasheets', requireRole('engineer', 'admin'), uploadOne(uploadsDir), async (req, res) => {
+    const file = req.file as (Express.Multer.File & StoredFile) | undefined;
+    if (!file) throw AppError.badRequest('invalid_upload', 'Choose a PDF to upload.', { file: 'Choose a PDF to upload' });
+    const sheet = await service.attach(req.params.id as string, { ...file, originalName: file.originalname }, req.user!);
+    res.status(201).json({ datasheet: sheet });
+  });
+
+  router.get('/datasheets/:id', requireSignedIn, async (req, res) => {
+    const file = await service.forDownload(req.params.id as string, req.user!);
+    res.setHeader('Content-Type', 'application/pdf');
+    res.setHeader('Content-Length', String(file.sizeBytes));
+    res.attachment(file.originalName);
+    res.sendFile(file.path);
+  });
+
+  return router;
+}

@@ -1,0 +1,77 @@
+import { randomUUID } from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
+import type { DatasheetView } from '../../shared/schemas/alloy';
+import { Datasheet, AlloyRevision } from '../catalogue/catalogue.entities';
+import type { CatalogueStore } from '../catalogue/catalogue.repository';
+import { canEdit, type Actor } from '../catalogue/catalogue.service';
+import { datasheetView } from '../catalogue/catalogue.views';
+import { AppError } from '../http/app-error';
+import type { StoredFile } from './pdf-storage';
+
+/** Keeps what a person typed as a file name only as display text: no paths, no control characters. */
+export function cleanOriginalName(name: string): string {
+  const base = name.split(/[\\/]/).pop() ?? '';
+  const cleaned = base.replace(/[\u0000-\u001f\u007f]/g, '').trim().slice(0, 200);
+  return cleaned.length > 0 ? cleaned : 'datasheet.pdf';
+}
+
+export class DatasheetsService {
+  constructor(
+    private readonly store: CatalogueStore,
+    private readonly uploadsDir: string,
+  ) {}
+
+  async attach(alloyId: string, file: StoredFile & { originalName: string }, actor: Actor): Promise<DatasheetView> {
+    try {
+      return await this.store.write(async (repo) => {
+        const alloy = await repo.findAlloy(alloyId);
+        if (!alloy) throw AppError.notFound('There is no such alloy.');
+        const sheet = await repo.saveDatasheet(
+          repo.create(Datasheet, {
+            id: randomUUID(),
+            alloyId,
+            originalName: cleanOriginalName(file.originalName),
+            storedName: file.storedName,
+            sizeBytes: file.sizeBytes,
+            sha256: file.sha256,
+            uploadedBy: actor?.name ?? null,
+            uploadedAt: new Date(),
+          }),
+        );
+        await repo.addRevision(
+          repo.create(AlloyRevision, {
+            id: randomUUID(),
+            alloyId,
+            version: null,
+            action: 'datasheet_added',
+            userId: actor?.id ?? null,
+            userName: actor?.name ?? null,
+            note: sheet.originalName,
+            diff: [{ path: 'datasheets', before: null, after: { name: sheet.originalName, sha256: sheet.sha256 } }],
+            at: new Date(),
+          }),
+        );
+        return datasheetView(sheet);
+      });
+    } catch (err) {
+      this.discard(file.storedName);
+      throw err;
+    }
+  }
+
+  discard(storedName: string) {
+    fs.rmSync(path.join(this.uploadsDir, storedName), { force: true });
+  }
+
+  /** The file behind a download link: any signed-in person for a published alloy, editors for drafts. */
+  async forDownload(id: string, actor: Actor): Promise<{ path: string; originalName: string; sizeBytes: number }> {
+    const repo = this.store.read();
+    const sheet = await repo.findDatasheet(id);
+    const alloy = sheet ? await repo.findAlloy(sheet.alloyId) : null;
+    if (!sheet || !alloy || (!alloy.publishedVersionId && !canEdit(actor))) throw AppError.notFound('There is no such data sheet.');
+    const file = path.join(this.uploadsDir, sheet.storedName);
+    if (!fs.existsSync(file)) throw AppError.notFound('The data sheet file is missing from storage.');
+    return { path: file, originalName: sheet.originalName, sizeBytes: sheet.sizeBytes };
+  }
+}

@@ -1,0 +1,64 @@
+import { randomUUID } from 'node:crypto';
+import type { FlexPart } from '../../shared/engine/types';
+import type { FlexPartInput, FlexPartView } from '../../shared/schemas/alloy';
+import { AppError } from '../http/app-error';
+import type { FlexPartRow } from './flex-part.entity';
+import type { FlexPartsRepository } from './flex-parts.repository';
+
+function view(row: FlexPartRow): FlexPartView {
+  return {
+    id: row.id,
+    code: row.code,
+    name: row.name,
+    boreMm: row.boreMm,
+    liveLengthMm: row.liveLengthMm,
+    ratedAxialCompressionMm: row.ratedAxialCompressionMm,
+    ratedAxialExtensionMm: row.ratedAxialExtensionMm,
+    lateralOffsetMm: row.lateralOffsetMm,
+    maxTempC: row.maxTempC,
+    price: row.price,
+    currency: row.currency,
+    active: Boolean(row.active),
+    isDemo: Boolean(row.isDemo),
+  };
+}
+
+export class FlexPartsService {
+  constructor(private readonly repo: FlexPartsRepository) {}
+
+  async list(includeInactive: boolean): Promise<FlexPartView[]> {
+    return (await this.repo.list(!includeInactive)).map(view);
+  }
+
+  /** The active parts, as the calculator's flex sizing reads them. */
+  async forSizing(): Promise<FlexPart[]> {
+    return (await this.repo.list(true)).map((row) => ({
+      id: row.id,
+      name: `${row.code} ${row.name}`,
+      boreMm: row.boreMm,
+      liveLengthMm: row.liveLengthMm,
+      ratedAxialCompressionMm: row.ratedAxialCompressionMm,
+      ratedAxialExtensionMm: row.ratedAxialExtensionMm,
+      lateralOffsetMm: row.lateralOffsetMm,
+      maxTempC: row.maxTempC,
+      price: row.price,
+    }));
+  }
+
+  async create(input: FlexPartInput, isDemo = false): Promise<FlexPartView> {
+    if (await this.repo.findByCode(input.code)) {
+      throw AppError.conflict('code_taken', 'A flex part with this code already exists.', { code: 'This code is taken' });
+    }
+    return view(await this.repo.save(this.repo.create({ id: randomUUID(), ...input, isDemo })));
+  }
+
+  async update(id: string, input: Partial<FlexPartInput>): Promise<FlexPartView> {
+    const row = await this.repo.findById(id);
+    if (!row) throw AppError.notFound('There is no such flex part.');
+    if (input.code && input.code !== row.code && (await this.repo.findByCode(input.code))) {
+      throw AppError.conflict('code_taken', 'A flex part with this code already exists.', { code: 'This code is taken' });
+    }
+    Object.assign(row, input);
+    return view(await this.repo.save(row));
+  }
+}
