@@ -15,6 +15,7 @@ import { webApp } from './web/web-app';
 import { catalogueRouter } from './catalogue/catalogue.router';
 import { CatalogueStore } from './catalogue/catalogue.repository';
 import { CatalogueService } from './catalogue/catalogue.service';
+import { CatalogueCsvService } from './catalogue/catalogue-csv.service';
 import { datasheetsRouter } from './datasheets/datasheets.router';
 import { DatasheetsService } from './datasheets/datasheets.service';
 import { FlexPartsRepository } from './flex-parts/flex-parts.repository';
@@ -70,7 +71,7 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.use('/users', usersRouter(usersService));
   api.use('/flex-parts', flexPartsRouter(flexPartsService));
   api.use(datasheetsRouter(datasheetsService, options.uploadsDir));
-  api.use(catalogueRouter(catalogueService));
+  api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore)));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

@@ -4,11 +4,13 @@ import { alloyInputSchema, alloyListQuerySchema, alloyPatchSchema, sourceInputSc
 import { requireRole, requireSignedIn } from '../auth/session';
 import { AppError } from '../http/app-error';
 import { fieldsFromZod, parseBody } from '../http/validate';
+import type { CatalogueCsvService } from './catalogue-csv.service';
 import type { CatalogueService } from './catalogue.service';
+import express from 'express';
 
 const noteSchema = z.object({ note: z.string().trim().max(500).default('') });
 
-export function catalogueRouter(service: CatalogueService): Router {
+export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvService): Router {
   const router = Router();
   const editors = requireRole('engineer', 'admin');
   const admins = requireRole('admin');
@@ -17,6 +19,17 @@ export function catalogueRouter(service: CatalogueService): Router {
     const query = alloyListQuerySchema.safeParse(req.query);
     if (!query.success) throw AppError.badRequest('invalid_query', 'Some filters are not valid.', fieldsFromZod(query.error));
     res.json(await service.list(query.data, req.user!));
+  });
+
+  router.get('/alloys/export.csv', requireSignedIn, async (req, res) => {
+    res.type('text/csv; charset=utf-8').attachment('dilato-catalogue.csv').send(await csv.export(req.user!));
+  });
+
+  router.post('/alloys/import', editors, express.text({ type: ['text/csv', 'text/plain'], limit: '5mb' }), async (req, res) => {
+    if (typeof req.body !== 'string' || req.body.trim() === '') {
+      throw AppError.badRequest('invalid_csv', 'Send the CSV as the request body (text/csv).', { file: 'Empty or not CSV' });
+    }
+    res.json(await csv.import(req.body, req.user!));
   });
 
   router.post('/alloys', editors, async (req, res) => {

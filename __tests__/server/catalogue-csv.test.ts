@@ -1,0 +1,83 @@
+import Papa from 'papaparse';
+import { CSV_COLUMNS } from '../../shared/catalogue/catalogue-csv';
+import type { AlloySummary } from '../../shared/schemas/alloy';
+import { createTestApp, expectErrorShape, signedIn, type TestApp } from './test-app';
+
+let t: TestApp;
+beforeEach(async () => {
+  t = await createTestApp();
+});
+afterEach(() => t.close());
+
+async function exportCsv(): Promise<Record<string, string>[]> {
+  const fab = await signedIn(t.app, 'fabricator');
+  const res = await fab.get('/api/alloys/export.csv');
+  expect(res.status).toBe(200);
+  expect(res.headers['content-type']).toMatch(/^text\/csv/);
+  return Papa.parse<Record<string, string>>(res.text, { header: true, skipEmptyLines: true }).data;
+}
+
+describe('catalogue CSV', () => {
+  it('when exported, then every published property point is one row naming its source', async () => {
+    const rows = await exportCsv();
+    expect(Object.keys(rows[0])).toEqual([...CSV_COLUMNS]);
+    const fab = await signedIn(t.app, 'fabricator');
+    const list = (await fab.get('/api/alloys')).body.items as AlloySummary[];
+    expect(new Set(rows.map((r) => r.uns)).size).toBe(list.length);
+    const s321 = rows.filter((r) => r.uns === 'S32100' && r.property === 'cte_mean_um_per_m_k');
+    // 321: 16.6 / 18.9 / 20.5 µm/m·K at 100 / 600 / 1000 °C, from the seed's cited supplier table (reference-data §1.4).
+    expect(s321.map((r) => [Number(r.temp_c), Number(r.value)])).toEqual([[100, 16.6], [600, 18.9], [1000, 20.5]]);
+    expect(rows.every((r) => r.source.length > 0)).toBe(true);
+  });
+
+  it('when the export is imported unchanged, then nothing is drafted', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const csv = (await (await signedIn(t.app, 'fabricator')).get('/api/alloys/export.csv')).text;
+    const res = await eng.post('/api/alloys/import').set('Content-Type', 'text/csv').send(csv);
+    expect(res.status).toBe(200);
+    expect(res.body.created).toEqual([]);
+    expect(res.body.updated).toEqual([]);
+    expect(res.body.refused).toEqual([]);
+    expect(res.body.unchanged.length).toBeGreaterThanOrEqual(15);
+  });
+
+  it('when rows are good, bad, or contradict each other, then good alloys become drafts and each bad row is reported by line', async () => {
+    const rows = await exportCsv();
+    const pick = (uns: string) => rows.filter((r) => r.uns === uns).map((r) => ({ ...r }));
+    const changed = pick('S34700').map((r) => (r.property === 'cte_mean_um_per_m_k' && r.temp_c === '600' ? { ...r, value: '18.8' } : r));
+    const fresh = pick('S32100').map((r) => ({ ...r, uns: 'S32109', designation: 'Type 321H' }));
+    const badSource = pick('S30400').map((r, i) => (i === 0 ? { ...r, source: 'no-such-source' } : r));
+    const badValue = pick('S43000').map((r, i) => (i === 1 ? { ...r, value: 'hot' } : r));
+    const contradicting = pick('S40910').map((r, i) => (i === 2 ? { ...r, density_kg_m3: '1' } : r));
+    const all = [...changed, ...fresh, ...badSource, ...badValue, ...contradicting];
+    const csv = Papa.unparse({ fields: [...CSV_COLUMNS], data: all.map((r) => CSV_COLUMNS.map((c) => r[c])) });
+
+    const eng = await signedIn(t.app, 'engineer');
+    const res = await eng.post('/api/alloys/import').set('Content-Type', 'text/csv').send(csv);
+    expect(res.status).toBe(200);
+    expect(res.body.updated).toEqual(['S34700']);
+    expect(res.body.created).toEqual(['S32109']);
+    const refusedUns = res.body.refused.map((r: { uns: string }) => r.uns);
+    expect(refusedUns).toEqual(expect.arrayContaining(['S30400', 'S43000', 'S40910']));
+    const sourceLine = changed.length + fresh.length + 2; // header is line 1
+    expect(res.body.refused.find((r: { uns: string }) => r.uns === 'S30400')).toMatchObject({ line: sourceLine, message: expect.stringMatching(/Unknown source/) });
+
+    // The published data does not move until an admin publishes the drafts.
+    const fab = await signedIn(t.app, 'fabricator');
+    const s347 = (await fab.get('/api/alloys').query({ search: 'S34700' })).body.items[0];
+    const detail = (await eng.get(`/api/alloys/${s347.id}`)).body.alloy;
+    expect(detail.published.cte.find((p: { tempC: number }) => p.tempC === 600).meanUmPerMK).toBe(18.9);
+    expect(detail.draft.cte.find((p: { tempC: number }) => p.tempC === 600).meanUmPerMK).toBe(18.8);
+    expect((await fab.get('/api/alloys').query({ search: 'S32109' })).body.total).toBe(0);
+  });
+
+  it('when columns are missing, then 400 names them; fabricators may not import', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const res = await eng.post('/api/alloys/import').set('Content-Type', 'text/csv').send('uns,designation\nS30400,Type 304');
+    expect(res.status).toBe(400);
+    expectErrorShape(res.body, 'invalid_csv');
+    expect(res.body.error.message).toMatch(/family/);
+    const fab = await signedIn(t.app, 'fabricator');
+    expect((await fab.post('/api/alloys/import').set('Content-Type', 'text/csv').send('uns\n')).status).toBe(403);
+  });
+});
