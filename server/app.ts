@@ -12,6 +12,8 @@ import { UsersRepository } from './users/users.repository';
 import { usersRouter } from './users/users.router';
 import { UsersService } from './users/users.service';
 import { webApp } from './web/web-app';
+import { calcRouter } from './calc/calc.router';
+import { CalcService } from './calc/calc.service';
 import { catalogueRouter } from './catalogue/catalogue.router';
 import { CatalogueStore } from './catalogue/catalogue.repository';
 import { CatalogueService } from './catalogue/catalogue.service';
@@ -69,6 +71,7 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   });
   api.use('/auth', authRouter(auth, authService, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS));
   api.use('/users', usersRouter(usersService));
+  api.use('/calc', calcRouter(new CalcService(catalogueService, flexPartsService)));
   api.use('/flex-parts', flexPartsRouter(flexPartsService));
   api.use(datasheetsRouter(datasheetsService, options.uploadsDir));
   api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore)));

@@ -1,0 +1,74 @@
+/**
+ * npm run bench: how fast the engine answers the client's live recompute.
+ * Prints figures only; no assertions.
+ */
+import { calculateRun } from '../shared/engine/calculate-run';
+import type { AlloyData, RunInput } from '../shared/engine/types';
+
+const FRAME_MS = 1000 / 60;
+const SECONDS = 1;
+
+// 304-like data: mean coefficients every 50 °C from the EN 1993-1-2 Annex C law (20 °C reference).
+const temps = Array.from({ length: 24 }, (_, i) => 50 + 50 * i);
+const alloy: AlloyData = {
+  referenceTempC: 20,
+  cte: temps.map((t) => ({ tempC: t, meanUmPerMK: 16 + 4.79e-3 * t - 1.243e-6 * t * t })),
+  // 193 GPa and 205 MPa at 20 °C scaled by the EN 1993-1-2 Annex C factors k_E,θ and k_0.2p,θ for 1.4301.
+  modulus: [1, 0.96, 0.92, 0.88, 0.84, 0.8, 0.76, 0.71, 0.63, 0.45, 0.2, 0.1].map((k, i) => ({ tempC: i === 0 ? 20 : 100 * i, gpa: 193 * k })),
+  yield: [1, 0.82, 0.68, 0.64, 0.6, 0.54, 0.49, 0.4, 0.27, 0.14, 0.06, 0.03].map((k, i) => ({ tempC: i === 0 ? 20 : 100 * i, mpa: 205 * k })),
+  densityKgM3: 8000,
+  maxContinuousC: 925,
+  maxIntermittentC: 870,
+  pricePerKg: 5.2,
+  warningRanges: [{ fromC: 427, toC: 871, code: 'CARBIDE_PRECIPITATION', message: 'Carbide precipitation range' }],
+};
+
+const input: RunInput = {
+  tube: { odMm: 76.2, wallMm: 1.65 },
+  installTempC: 20,
+  segments: Array.from({ length: 10 }, (_, i) => ({ lengthMm: 80 + 10 * i, startTempC: 900 - 40 * i, endTempC: 860 - 40 * i })),
+  flex: {
+    parts: [
+      { id: 'a', name: 'A', boreMm: 76.2, liveLengthMm: 150, ratedAxialCompressionMm: 25, ratedAxialExtensionMm: 25, lateralOffsetMm: 6, maxTempC: 950, price: 90 },
+      { id: 'b', name: 'B', boreMm: 76.2, liveLengthMm: 100, ratedAxialCompressionMm: 10, ratedAxialExtensionMm: 10, lateralOffsetMm: 4, maxTempC: 950, price: 70 },
+    ],
+  },
+};
+
+function timeLoop(fn: () => number): { perSecond: number; sink: number } {
+  let sink = 0;
+  for (let i = 0; i < 2000; i++) sink += fn(); // warm-up for the JIT
+  let n = 0;
+  const start = performance.now();
+  const end = start + SECONDS * 1000;
+  let now = start;
+  while (now < end) {
+    for (let i = 0; i < 100; i++) sink += fn();
+    n += 100;
+    now = performance.now();
+  }
+  return { perSecond: (n * 1000) / (now - start), sink };
+}
+
+const engine = timeLoop(() => calculateRun(input, alloy).growthMm);
+
+// Naive α·L·ΔT over the same segments with one room-temperature coefficient and mean segment temperature.
+const alpha = alloy.cte[0].meanUmPerMK * 1e-6;
+const segs = input.segments;
+const bare = timeLoop(() => {
+  let g = 0;
+  for (const s of segs) g += alpha * s.lengthMm * ((s.startTempC + s.endTempC) / 2 - input.installTempC);
+  return g;
+});
+
+const result = calculateRun(input, alloy);
+const meanMs = 1000 / engine.perSecond;
+const fmt = (x: number, d = 0) => x.toLocaleString('en-US', { maximumFractionDigits: d, minimumFractionDigits: d });
+
+console.log('Dilato engine bench (10-segment run, curves, stress, limits, flex, mass)');
+console.log(`  curve points: ${result.curve.length}, growth-per-metre points: ${result.growthPerMetreCurve.length}`);
+console.log(`  calculateRun:       ${fmt(engine.perSecond)} runs/s`);
+console.log(`  bare α·L·ΔT loop:   ${fmt(bare.perSecond)} runs/s`);
+console.log(`  ratio (bare/engine): ${fmt(bare.perSecond / engine.perSecond, 0)}×`);
+console.log(`  mean calculateRun:  ${fmt(meanMs, 4)} ms vs a ${fmt(FRAME_MS, 1)} ms frame (${fmt((meanMs / FRAME_MS) * 100, 2)} % of a frame)`);
+console.log(`  (checksums ${fmt(engine.sink % 1000, 3)} / ${fmt(bare.sink % 1000, 3)})`);

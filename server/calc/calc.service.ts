@@ -1,0 +1,57 @@
+import { calculateRun, isEngineInputError, type CalcRunRequest, type RunResult } from '../../shared/schemas/calc';
+import type { AlloyData } from '../../shared/engine/types';
+import { AppError } from '../http/app-error';
+import type { CatalogueService } from '../catalogue/catalogue.service';
+import type { FlexPartsService } from '../flex-parts/flex-parts.service';
+
+export interface AlloyUsed {
+  id: string;
+  designation: string;
+  uns: string;
+  version: number;
+}
+
+export type CalcResponse = RunResult & { alloy: AlloyUsed | null };
+
+export class CalcService {
+  constructor(
+    private readonly catalogue: CatalogueService,
+    private readonly flexParts: FlexPartsService,
+  ) {}
+
+  /** Published catalogue data for an id, or a 400 naming the field that asked for it. */
+  private async published(alloyId: string, field: string) {
+    try {
+      return await this.catalogue.publishedAlloy(alloyId);
+    } catch (err) {
+      if (err instanceof AppError && err.status === 404) {
+        throw AppError.badRequest('invalid_input', 'Some values need attention.', { [field]: 'No published alloy with this id' });
+      }
+      throw err;
+    }
+  }
+
+  async run(body: CalcRunRequest): Promise<CalcResponse> {
+    let alloy: AlloyData;
+    let used: AlloyUsed | null = null;
+    if (body.alloyId) {
+      const p = await this.published(body.alloyId, 'alloyId');
+      alloy = p.data;
+      used = { id: p.alloyId, designation: p.designation, uns: p.uns, version: p.version };
+    } else {
+      alloy = body.alloy!;
+    }
+    const slipAlloys: { inner?: AlloyData; outer?: AlloyData } = {};
+    for (const side of ['inner', 'outer'] as const) {
+      const id = body.slip?.[side].alloyId;
+      if (id) slipAlloys[side] = (await this.published(id, `slip.${side}.alloyId`)).data;
+    }
+    const flexParts = body.flex && !body.flex.parts ? await this.flexParts.forSizing() : undefined;
+    try {
+      return { ...calculateRun(body, alloy, { flexParts, slipAlloys }), alloy: used };
+    } catch (err) {
+      if (isEngineInputError(err)) throw AppError.badRequest('invalid_input', 'Some values are outside what the data covers.', err.fields);
+      throw err;
+    }
+  }
+}

@@ -1,0 +1,152 @@
+import convert from 'convert-units';
+
+/** Conversions at the edges of the app; the engine and the API stay SI (mm, °C, kg, MPa). */
+
+export type UnitSystem = 'metric' | 'imperial';
+
+export const mmToIn = (mm: number): number => convert(mm).from('mm').to('in');
+export const inToMm = (inch: number): number => convert(inch).from('in').to('mm');
+export const cToF = (c: number): number => convert(c).from('C').to('F');
+export const fToC = (f: number): number => convert(f).from('F').to('C');
+export const kgToLb = (kg: number): number => convert(kg).from('kg').to('lb');
+export const lbToKg = (lb: number): number => convert(lb).from('lb').to('kg');
+export const mpaToKsi = (mpa: number): number => convert(mpa).from('MPa').to('ksi');
+export const ksiToMpa = (ksi: number): number => convert(ksi).from('ksi').to('MPa');
+
+/**
+ * Temperature differences scale by 9/5 with no offset: a rise of 100 °C is a rise of 180 °F.
+ * convert-units only knows temperature levels, and routing a difference through them adds
+ * the 32 °F offset, which is the classic bug.
+ */
+export const deltaCToF = (dc: number): number => (dc * 9) / 5;
+export const deltaFToC = (df: number): number => (df * 5) / 9;
+
+/** Mean expansion coefficient: µm/(m·K) ↔ µin/(in·°F). */
+export const cteMetricToImperial = (perK: number): number => (perK * 5) / 9;
+export const cteImperialToMetric = (perF: number): number => (perF * 9) / 5;
+
+/** Growth per length: mm per metre ↔ inches per 100 ft (the unit of ASME B31.3 Appendix C). */
+const IN_PER_100FT_IN_MM_PER_M = inToMm(1) / (convert(100).from('ft').to('m'));
+export const mmPerMToInPer100Ft = (mmPerM: number): number => mmPerM / IN_PER_100FT_IN_MM_PER_M;
+export const inPer100FtToMmPerM = (inPer100Ft: number): number => inPer100Ft * IN_PER_100FT_IN_MM_PER_M;
+
+/** Birmingham Wire Gauge tube walls in inches, as the tube trade sells them. Sheet gauges differ. */
+export const BWG_WALL_IN: Readonly<Record<number, number>> = {
+  20: 0.035,
+  18: 0.049,
+  16: 0.065,
+  14: 0.083,
+  13: 0.095,
+  12: 0.109,
+  11: 0.12,
+  10: 0.134,
+};
+
+export const TUBE_GAUGES: readonly number[] = Object.keys(BWG_WALL_IN)
+  .map(Number)
+  .sort((a, b) => b - a);
+
+/** Wall in mm for a BWG gauge; null for a gauge not in the table. */
+export function gaugeToWallMm(gauge: number): number | null {
+  const inch = BWG_WALL_IN[gauge];
+  return inch === undefined ? null : inToMm(inch);
+}
+
+/** Nearest BWG gauge to a wall, or null when no gauge lies within toleranceMm (default 0.02 mm, finer than any gauge step). */
+export function wallMmToGauge(wallMm: number, toleranceMm = 0.02): number | null {
+  let best: number | null = null;
+  let bestDiff = Infinity;
+  for (const g of TUBE_GAUGES) {
+    const diff = Math.abs(inToMm(BWG_WALL_IN[g]) - wallMm);
+    if (diff < bestDiff) {
+      bestDiff = diff;
+      best = g;
+    }
+  }
+  return bestDiff <= toleranceMm ? best : null;
+}
+
+export type QuantityKind =
+  | 'length' // tube lengths, diameters
+  | 'smallLength' // growth, clearances, walls
+  | 'temperature'
+  | 'temperatureDelta'
+  | 'mass'
+  | 'stress'
+  | 'growthPerLength';
+
+interface Display {
+  unit: string;
+  decimals: number;
+  fromSi: (v: number) => number;
+  toSi: (v: number) => number;
+}
+
+const same = (v: number) => v;
+
+const DISPLAY: Record<QuantityKind, Record<UnitSystem, Display>> = {
+  length: {
+    metric: { unit: 'mm', decimals: 1, fromSi: same, toSi: same },
+    imperial: { unit: 'in', decimals: 2, fromSi: mmToIn, toSi: inToMm },
+  },
+  smallLength: {
+    metric: { unit: 'mm', decimals: 2, fromSi: same, toSi: same },
+    imperial: { unit: 'in', decimals: 3, fromSi: mmToIn, toSi: inToMm },
+  },
+  temperature: {
+    metric: { unit: '°C', decimals: 0, fromSi: same, toSi: same },
+    imperial: { unit: '°F', decimals: 0, fromSi: cToF, toSi: fToC },
+  },
+  temperatureDelta: {
+    metric: { unit: '°C', decimals: 0, fromSi: same, toSi: same },
+    imperial: { unit: '°F', decimals: 0, fromSi: deltaCToF, toSi: deltaFToC },
+  },
+  mass: {
+    metric: { unit: 'kg', decimals: 2, fromSi: same, toSi: same },
+    imperial: { unit: 'lb', decimals: 2, fromSi: kgToLb, toSi: lbToKg },
+  },
+  stress: {
+    metric: { unit: 'MPa', decimals: 0, fromSi: same, toSi: same },
+    imperial: { unit: 'ksi', decimals: 1, fromSi: mpaToKsi, toSi: ksiToMpa },
+  },
+  growthPerLength: {
+    metric: { unit: 'mm/m', decimals: 2, fromSi: same, toSi: same },
+    imperial: { unit: 'in/100 ft', decimals: 2, fromSi: mmPerMToInPer100Ft, toSi: inPer100FtToMmPerM },
+  },
+};
+
+export function unitLabel(kind: QuantityKind, system: UnitSystem): string {
+  return DISPLAY[kind][system].unit;
+}
+
+/** SI value → the number shown in the chosen system. */
+export function toDisplay(kind: QuantityKind, siValue: number, system: UnitSystem): number {
+  return DISPLAY[kind][system].fromSi(siValue);
+}
+
+/** A number typed in the chosen system → SI. */
+export function fromDisplay(kind: QuantityKind, value: number, system: UnitSystem): number {
+  return DISPLAY[kind][system].toSi(value);
+}
+
+export interface Formatted {
+  value: number;
+  unit: string;
+  text: string;
+}
+
+/** SI value → rounded display value, its unit and "12.34 mm" text. */
+export function formatQuantity(
+  kind: QuantityKind,
+  siValue: number,
+  system: UnitSystem,
+  decimals: number = DISPLAY[kind][system].decimals,
+): Formatted {
+  const d = DISPLAY[kind][system];
+  const shown = d.fromSi(siValue);
+  const factor = 10 ** decimals;
+  // + 0 turns −0 into 0, so a tiny negative never prints as "-0.00".
+  const value = Math.round(shown * factor) / factor + 0;
+  const text = Number.isFinite(value) ? `${value.toFixed(decimals)} ${d.unit}` : `— ${d.unit}`;
+  return { value, unit: d.unit, text };
+}
