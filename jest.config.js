@@ -23,5 +23,14 @@ module.exports = {
       transformIgnorePatterns: ['/node_modules/(?!(lucia|oslo|@oslojs|@lucia-auth)/)'],
       moduleNameMapper: { '^(\\.{1,2}/.*)\\.js$': '$1' },
     },
+    {
+      displayName: 'client',
+      preset: 'jest-expo',
+      rootDir: __dirname,
+      testMatch: ['<rootDir>/__tests__/client/**/*.test.{ts,tsx}'],
+      transformIgnorePatterns: [
+        'node_modules/(?!((jest-)?react-native|@react-native(-community)?|expo(nent)?|@expo(nent)?/.*|@expo-google-fonts/.*|react-navigation|@react-navigation/.*|react-native-svg|victory.*|@tanstack/.*))',
+      ],
+    },
   ],
 };

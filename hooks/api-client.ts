@@ -1,0 +1,116 @@
+import type { ApiErrorBody } from '../shared/schemas/api-error';
+
+/** Every way a request can fail, reduced to what the UI needs to decide what to show. */
+export type ApiFailureKind =
+  | 'signed_out'
+  | 'forbidden'
+  | 'not_found'
+  | 'invalid'
+  | 'conflict'
+  | 'rate_limited'
+  | 'offline'
+  | 'server';
+
+export class ApiError extends Error {
+  readonly kind: ApiFailureKind;
+  readonly status: number;
+  /** The server's snake_case code, when it sent one (e.g. `email_taken`, `last_admin`). */
+  readonly code: string | undefined;
+  readonly fields: Record<string, string>;
+
+  constructor(kind: ApiFailureKind, message: string, status = 0, code?: string, fields: Record<string, string> = {}) {
+    super(message);
+    this.name = 'ApiError';
+    this.kind = kind;
+    this.status = status;
+    this.code = code;
+    this.fields = fields;
+  }
+}
+
+export function isApiError(error: unknown): error is ApiError {
+  return error instanceof ApiError;
+}
+
+const fallbackMessages: Record<ApiFailureKind, string> = {
+  signed_out: 'Your session has ended. Sign in again.',
+  forbidden: 'Your role does not allow this.',
+  not_found: 'That could not be found.',
+  invalid: 'Some of the details need correcting.',
+  conflict: 'That clashes with something that already exists.',
+  rate_limited: 'Too many attempts. Wait a little and try again.',
+  offline: 'Dilato cannot reach the server. Check the connection and try again.',
+  server: 'Something went wrong on the server. Try again in a moment.',
+};
+
+function kindFor(status: number): ApiFailureKind {
+  if (status === 401) return 'signed_out';
+  if (status === 403) return 'forbidden';
+  if (status === 404) return 'not_found';
+  if (status === 409) return 'conflict';
+  if (status === 429) return 'rate_limited';
+  if (status === 400 || status === 422) return 'invalid';
+  return 'server';
+}
+
+function isErrorBody(value: unknown): value is ApiErrorBody {
+  if (typeof value !== 'object' || value === null || !('error' in value)) return false;
+  const inner = (value as { error: unknown }).error;
+  return typeof inner === 'object' && inner !== null && typeof (inner as { message?: unknown }).message === 'string';
+}
+
+/** A readable message for any thrown value, for banners. */
+export function messageOf(error: unknown): string {
+  if (isApiError(error)) return error.message;
+  return fallbackMessages.server;
+}
+
+type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+
+async function request<T>(method: Method, path: string, body?: unknown): Promise<T> {
+  let response: Response;
+  try {
+    response = await fetch(`/api${path}`, {
+      method,
+      credentials: 'include',
+      headers: body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+  } catch {
+    throw new ApiError('offline', fallbackMessages.offline);
+  }
+
+  if (response.status === 204) return undefined as T;
+
+  let payload: unknown = undefined;
+  const text = await response.text();
+  if (text) {
+    try {
+      payload = JSON.parse(text);
+    } catch {
+      payload = undefined;
+    }
+  }
+
+  if (response.ok) return payload as T;
+
+  const kind = kindFor(response.status);
+  if (isErrorBody(payload)) {
+    const { code, message, fields } = payload.error;
+    throw new ApiError(kind, message || fallbackMessages[kind], response.status, code, fields ?? {});
+  }
+  throw new ApiError(kind, fallbackMessages[kind], response.status);
+}
+
+export const api = {
+  get: <T>(path: string) => request<T>('GET', path),
+  post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
+  patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, body),
+  delete: <T>(path: string) => request<T>('DELETE', path),
+};
+
+/** Only failures that might pass on their own are worth repeating. */
+export function shouldRetry(failureCount: number, error: unknown): boolean {
+  if (failureCount >= 2) return false;
+  return !isApiError(error) || error.kind === 'offline' || error.kind === 'server';
+}
