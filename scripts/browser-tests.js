@@ -1,0 +1,68 @@
+// `npm run test:browser`: builds the web app if needed, starts the real server on a fresh
+// database with the demo seed, and runs the Chromium tests in __tests__/browser against it.
+const fs = require('node:fs');
+const os = require('node:os');
+const path = require('node:path');
+const net = require('node:net');
+const { spawnSync } = require('node:child_process');
+const { ensureWebBuild } = require('./web-build');
+const { startServer } = require('./server-process');
+
+const root = path.resolve(__dirname, '..');
+
+function freePort() {
+  return new Promise((resolve, reject) => {
+    const srv = net.createServer();
+    srv.listen(0, '127.0.0.1', () => {
+      const { port } = srv.address();
+      srv.close(() => resolve(port));
+    });
+    srv.on('error', reject);
+  });
+}
+
+async function waitForHealth(url, server, timeoutMs = 30_000) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    if (server.exitCode !== null) throw new Error(`the server exited with code ${server.exitCode}`);
+    try {
+      const res = await fetch(`${url}/api/health`);
+      if (res.ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error(`the server did not answer ${url}/api/health within ${timeoutMs} ms`);
+}
+
+async function main() {
+  if (!fs.existsSync('/usr/bin/chromium')) {
+    console.error('Browser tests need Debian chromium at /usr/bin/chromium: apt-get install -y chromium');
+    process.exit(1);
+  }
+  ensureWebBuild();
+  const port = await freePort();
+  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-browser-'));
+  const baseUrl = `http://localhost:${port}`;
+  const server = startServer({ PORT: String(port), DATA_DIR: dataDir, SEED_DEMO: 'true' }, ['ignore', 'inherit', 'inherit']);
+  let status = 1;
+  try {
+    await waitForHealth(baseUrl, server);
+    const jest = spawnSync(
+      path.join(root, 'node_modules', '.bin', 'jest'),
+      ['-c', 'jest.browser.config.js', '--runInBand', ...process.argv.slice(2)],
+      { cwd: root, stdio: 'inherit', env: { ...process.env, DILATO_BASE_URL: baseUrl } },
+    );
+    status = jest.status ?? 1;
+  } finally {
+    server.kill('SIGTERM');
+    fs.rmSync(dataDir, { recursive: true, force: true });
+  }
+  process.exit(status);
+}
+
+main().catch((err) => {
+  console.error(err);
+  process.exit(1);
+});
