@@ -49,7 +49,7 @@ describe('catalogue CSV', () => {
     const badSource = pick('S30400').map((r, i) => (i === 0 ? { ...r, source: 'no-such-source' } : r));
     const badValue = pick('S43000').map((r, i) => (i === 1 ? { ...r, value: 'hot' } : r));
     const contradicting = pick('S40910').map((r, i) => (i === 2 ? { ...r, density_kg_m3: '1' } : r));
-    const all = [...changed, ...fresh, ...badSource, ...badValue, ...contradicting];
+    const all: Record<string, string>[] = [...changed, ...fresh, ...badSource, ...badValue, ...contradicting];
     const csv = Papa.unparse({ fields: [...CSV_COLUMNS], data: all.map((r) => CSV_COLUMNS.map((c) => r[c])) });
 
     const eng = await signedIn(t.app, 'engineer');
