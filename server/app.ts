@@ -23,10 +23,27 @@ import { DatasheetsService } from './datasheets/datasheets.service';
 import { FlexPartsRepository } from './flex-parts/flex-parts.repository';
 import { flexPartsRouter } from './flex-parts/flex-parts.router';
 import { FlexPartsService } from './flex-parts/flex-parts.service';
+import { JobsStore } from './jobs/jobs.repository';
+import { jobsRouter } from './jobs/jobs.router';
+import { JobsService } from './jobs/jobs.service';
+import { RunResults } from './jobs/run-results';
+import { PreferencesRepository } from './preferences/preferences.repository';
+import { preferencesRouter } from './preferences/preferences.router';
+import { PreferencesService } from './preferences/preferences.service';
+import type { Mailer } from './mail/mailer';
+import { OutboxRepository } from './mail/outbox.repository';
+import { outboxRouter } from './mail/outbox.router';
+import { QuotesStore } from './quotes/quotes.repository';
+import { publicQuotesRouter, quotesRouter } from './quotes/quotes.router';
+import { QuotesService } from './quotes/quotes.service';
+import { shopSettingsRouter } from './settings/shop-settings.router';
+import { ShopSettingsService } from './settings/shop-settings.service';
 
 export interface AppOptions {
   /** Where uploaded data sheets are kept. */
   uploadsDir: string;
+  /** Sends quotes and notifications (the embedded fake SMTP server by default). */
+  mailer: Mailer;
   webDir?: string;
   publicUrl?: string;
   trustProxy?: boolean;
@@ -74,6 +91,14 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.use('/calc', calcRouter(new CalcService(catalogueService, flexPartsService)));
   api.use('/flex-parts', flexPartsRouter(flexPartsService));
   api.use(datasheetsRouter(datasheetsService, options.uploadsDir));
+  api.use(jobsRouter(new JobsService(new JobsStore(dataSource), new RunResults(catalogueService, flexPartsService))));
+  const shopSettings = new ShopSettingsService(dataSource);
+  const quotes = new QuotesService(new QuotesStore(dataSource), new JobsStore(dataSource), catalogueService, shopSettings, usersRepository, options.mailer);
+  api.use('/settings', shopSettingsRouter(shopSettings));
+  api.use('/quotes', quotesRouter(quotes, options.publicUrl));
+  api.use('/public', publicQuotesRouter(quotes, options.publicUrl));
+  api.use('/outbox', outboxRouter(new OutboxRepository(dataSource)));
+  api.use('/me', preferencesRouter(new PreferencesService(new PreferencesRepository(dataSource))));
   api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore)));
   api.use(apiNotFound);
   api.use(errorHandler);

@@ -130,6 +130,7 @@ describe('reading the catalogue', () => {
 });
 
 describe('who may change the catalogue (every role × route)', () => {
+  let nextUns = 2000;
   const cells: { what: string; call: (c: Awaited<ReturnType<typeof signedIn>>, id: string) => Promise<{ status: number }>; allowed: Role[] }[] = [
     { what: 'list alloys', call: (c) => c.get('/api/alloys'), allowed: [...ROLES] },
     { what: 'read an alloy', call: (c, id) => c.get(`/api/alloys/${id}`), allowed: [...ROLES] },
@@ -156,7 +157,8 @@ describe('who may change the catalogue (every role × route)', () => {
       it(`when a ${role} tries to ${cell.what}, then ${allowed ? 'it is allowed' : '403'}`, async () => {
         // A fresh alloy per cell, so publish and retire each have a draft or a published alloy to act on.
         const admin = await signedIn(t.app, 'admin');
-        const uns = `N9${String(Math.floor(Math.random() * 10000)).padStart(4, '0')}`;
+        nextUns += 1;
+        const uns = `N9${String(nextUns).padStart(4, '0')}`;
         const created = await admin.post('/api/alloys').send(await newAlloyBody(uns));
         const id = created.body.alloy.id as string;
         await admin.post(`/api/alloys/${id}/publish`).send({});

@@ -3,11 +3,19 @@ import { DataSource } from 'typeorm';
 import { Alloy, AlloyRevision, AlloyVersion, Datasheet, PropertyPoint, Source } from '../catalogue/catalogue.entities';
 import { FlexPartRow } from '../flex-parts/flex-part.entity';
 import { User } from '../users/user.entity';
+import { Job, JobRun } from '../jobs/job.entities';
+import { UserPreference } from '../preferences/user-preference.entity';
+import { MailMessage } from '../mail/mail-message.entity';
+import { Quote, QuoteEvent } from '../quotes/quote.entities';
+import { ShopSettingsRow } from '../settings/shop-settings.entity';
+import { QuotesAndMail1764600300000 } from './migrations/1764600300000-quotes-and-mail';
+import { Jobs1764600200000 } from './migrations/1764600200000-jobs';
+import { UserPreferences1764600210000 } from './migrations/1764600210000-user-preferences';
 import { UsersAndSessions1764600000000 } from './migrations/1764600000000-users-and-sessions';
 import { Catalogue1764600100000 } from './migrations/1764600100000-catalogue';
 
-export const ENTITIES = [User, Source, Alloy, AlloyVersion, PropertyPoint, AlloyRevision, Datasheet, FlexPartRow];
-export const MIGRATIONS = [UsersAndSessions1764600000000, Catalogue1764600100000];
+export const ENTITIES = [User, Source, Alloy, AlloyVersion, PropertyPoint, AlloyRevision, Datasheet, FlexPartRow, Job, JobRun, UserPreference, MailMessage, ShopSettingsRow, Quote, QuoteEvent];
+export const MIGRATIONS = [UsersAndSessions1764600000000, Catalogue1764600100000, Jobs1764600200000, UserPreferences1764600210000, QuotesAndMail1764600300000];
 
 /** `database` is a file path, or ':memory:' for tests. */
 export function createDataSource(database: string): DataSource {

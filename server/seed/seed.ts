@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { seedCatalogue, seedFlexParts } from './catalogue-seed';
+import { seedDemoJobs } from './demo-jobs';
 import { seedDemoUsers } from './demo-users';
 
 export interface SeedOptions {
@@ -14,6 +15,7 @@ export interface SeedReport {
   sources: number;
   alloys: number;
   flexParts: number;
+  demoJobs?: number;
 }
 
 /** Runs every seed step; each adds only what is missing, so this is safe on every start. */
@@ -23,6 +25,7 @@ export async function seed(dataSource: DataSource, options: SeedOptions): Promis
   if (options.demo) {
     report.demoUsers = await seedDemoUsers(dataSource);
     report.flexParts = await seedFlexParts(dataSource);
+    report.demoJobs = await seedDemoJobs(dataSource);
   }
   return report;
 }

@@ -1,0 +1,70 @@
+import { In, type DataSource, type EntityManager } from 'typeorm';
+import type { JobListQuery } from '../../shared/schemas/jobs';
+import { User } from '../users/user.entity';
+import { Job, JobRun } from './job.entities';
+
+const likePattern = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+
+/** The only place job and run rows are read and written. Bind it to a transaction's manager to write atomically. */
+export class JobsRepository {
+  constructor(private readonly m: EntityManager) {}
+
+  listJobs(query: JobListQuery) {
+    const qb = this.m.createQueryBuilder(Job, 'j');
+    if (query.status !== 'all') qb.andWhere('j.status = :status', { status: query.status });
+    if (query.search) {
+      qb.andWhere("(j.name LIKE :like ESCAPE '\\' OR j.customer LIKE :like ESCAPE '\\' OR j.application LIKE :like ESCAPE '\\')", {
+        like: likePattern(query.search),
+      });
+    }
+    return qb.orderBy('j.updated_at', 'DESC').addOrderBy('j.name', 'ASC').getMany();
+  }
+  findJob(id: string) {
+    return this.m.findOneBy(Job, { id });
+  }
+  findJobByName(name: string) {
+    return this.m.findOneBy(Job, { name });
+  }
+  saveJob(job: Job) {
+    return this.m.save(Job, job);
+  }
+
+  runsOf(jobId: string) {
+    return this.m.find(JobRun, { where: { jobId }, order: { position: 'ASC' } });
+  }
+  runsOfJobs(jobIds: string[]) {
+    return jobIds.length === 0 ? Promise.resolve([]) : this.m.find(JobRun, { where: { jobId: In(jobIds) }, order: { position: 'ASC' } });
+  }
+  findRun(id: string) {
+    return this.m.findOneBy(JobRun, { id });
+  }
+  saveRuns(runs: JobRun[]) {
+    return this.m.save(JobRun, runs);
+  }
+  async deleteRun(id: string) {
+    await this.m.delete(JobRun, { id });
+  }
+
+  async userNames(ids: string[]): Promise<Map<string, string>> {
+    if (ids.length === 0) return new Map();
+    const users = await this.m.find(User, { where: { id: In(ids) }, select: { id: true, name: true } });
+    return new Map(users.map((u) => [u.id, u.name]));
+  }
+
+  create<T extends object>(entity: new () => T, fields: Partial<T>): T {
+    return Object.assign(new entity(), fields) as T;
+  }
+}
+
+/** Hands out repositories: one on the shared connection for reads, one per transaction for writes. */
+export class JobsStore {
+  constructor(private readonly dataSource: DataSource) {}
+
+  read(): JobsRepository {
+    return new JobsRepository(this.dataSource.manager);
+  }
+
+  write<T>(work: (repo: JobsRepository) => Promise<T>): Promise<T> {
+    return this.dataSource.transaction((m) => work(new JobsRepository(m)));
+  }
+}

@@ -1,0 +1,75 @@
+import { Router } from 'express';
+import {
+  compareQuerySchema,
+  jobCreateSchema,
+  jobListQuerySchema,
+  jobPatchSchema,
+  runCreateSchema,
+  runOrderSchema,
+  runPatchSchema,
+} from '../../shared/schemas/jobs';
+import { currentUser, requireRole, requireSignedIn } from '../auth/session';
+import { AppError } from '../http/app-error';
+import { fieldsFromZod, parseBody } from '../http/validate';
+import type { z } from 'zod';
+import type { JobsService } from './jobs.service';
+
+function parseQuery<S extends z.ZodType>(schema: S, query: unknown): z.output<S> {
+  const parsed = schema.safeParse(query);
+  if (!parsed.success) throw AppError.badRequest('invalid_query', 'Some filters are not valid.', fieldsFromZod(parsed.error));
+  return parsed.data;
+}
+
+/** Jobs and their runs: every signed-in role reads (sales quotes from them); the shop floor and engineering write. */
+export function jobsRouter(service: JobsService): Router {
+  const router = Router();
+  const editors = requireRole('fabricator', 'engineer', 'admin');
+  const id = (params: Record<string, unknown>) => params.id as string;
+
+  router.get('/jobs', requireSignedIn, async (req, res) => {
+    res.json(await service.list(parseQuery(jobListQuerySchema, req.query)));
+  });
+
+  router.post('/jobs', editors, async (req, res) => {
+    res.status(201).json({ job: await service.createJob(parseBody(jobCreateSchema, req.body), currentUser(req)) });
+  });
+
+  router.get('/jobs/:id', requireSignedIn, async (req, res) => {
+    res.json({ job: await service.detail(id(req.params)) });
+  });
+
+  router.patch('/jobs/:id', editors, async (req, res) => {
+    res.json({ job: await service.patchJob(id(req.params), parseBody(jobPatchSchema, req.body)) });
+  });
+
+  router.post('/jobs/:id/runs', editors, async (req, res) => {
+    res.status(201).json({ run: await service.createRun(id(req.params), parseBody(runCreateSchema, req.body)) });
+  });
+
+  router.put('/jobs/:id/runs/order', editors, async (req, res) => {
+    res.json({ job: await service.reorderRuns(id(req.params), parseBody(runOrderSchema, req.body)) });
+  });
+
+  router.get('/runs/:id', requireSignedIn, async (req, res) => {
+    res.json({ run: await service.run(id(req.params)) });
+  });
+
+  router.patch('/runs/:id', editors, async (req, res) => {
+    res.json({ run: await service.patchRun(id(req.params), parseBody(runPatchSchema, req.body)) });
+  });
+
+  router.delete('/runs/:id', editors, async (req, res) => {
+    await service.deleteRun(id(req.params));
+    res.status(204).end();
+  });
+
+  router.post('/runs/:id/duplicate', editors, async (req, res) => {
+    res.status(201).json({ run: await service.duplicateRun(id(req.params)) });
+  });
+
+  router.get('/runs/:id/compare', requireSignedIn, async (req, res) => {
+    res.json(await service.compare(id(req.params), parseQuery(compareQuerySchema, req.query).alloyIds));
+  });
+
+  return router;
+}

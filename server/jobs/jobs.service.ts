@@ -1,0 +1,287 @@
+import { randomUUID } from 'node:crypto';
+import { jobTotals } from '../../shared/jobs/job-totals';
+import type { PublicUser } from '../../shared/schemas/auth';
+import {
+  runFieldsSchema,
+  type CompareRow,
+  type CompareView,
+  type JobCreateInput,
+  type JobDetail,
+  type JobListQuery,
+  type JobPatchInput,
+  type JobSummary,
+  type RunCreateInput,
+  type RunFields,
+  type RunOrderInput,
+  type RunPatchInput,
+  type RunView,
+} from '../../shared/schemas/jobs';
+import { AppError } from '../http/app-error';
+import { fieldsFromZod } from '../http/validate';
+import { Job, JobRun } from './job.entities';
+import type { JobsRepository, JobsStore } from './jobs.repository';
+import { jobSummary, jobView, runFieldsOf, runView } from './jobs.views';
+import type { Computed, ResultSession, RunResults } from './run-results';
+
+/** Gives runs positions 1..n in the order given; returns the runs whose position changed. */
+function renumber(runs: JobRun[]): JobRun[] {
+  const changed: JobRun[] = [];
+  runs.forEach((run, i) => {
+    if (run.position !== i + 1) {
+      run.position = i + 1;
+      changed.push(run);
+    }
+  });
+  return changed;
+}
+
+function figuresOf(c: Computed): CompareRow['figures'] {
+  if (!c.result || !c.currency) return null;
+  const r = c.result;
+  return {
+    growthMm: r.growthMm,
+    limitStatus: r.limit.status,
+    marginC: r.limit.marginC,
+    stressRatio: r.stressRatio,
+    worstStressRatio: r.worstStressRatio,
+    jointNeeded: r.jointNeeded,
+    massKg: r.massKg,
+    materialCost: r.materialCost,
+    currency: c.currency,
+  };
+}
+
+export class JobsService {
+  constructor(
+    private readonly store: JobsStore,
+    private readonly results: RunResults,
+  ) {}
+
+  // ---- reading ----
+
+  private async computeAll(session: ResultSession, runs: JobRun[]): Promise<RunView[]> {
+    return Promise.all(runs.map(async (run) => runView(run, await session.compute(runFieldsOf(run)))));
+  }
+
+  async list(query: JobListQuery): Promise<{ items: JobSummary[]; total: number }> {
+    const repo = this.store.read();
+    const jobs = await repo.listJobs(query);
+    const runs = await repo.runsOfJobs(jobs.map((j) => j.id));
+    const session = this.results.session();
+    const views = await this.computeAll(session, runs);
+    const items = jobs.map((job) => jobSummary(job, jobTotals(views.filter((r) => r.jobId === job.id))));
+    return { items, total: items.length };
+  }
+
+  private async detailIn(repo: JobsRepository, job: Job): Promise<JobDetail> {
+    const [runs, names] = await Promise.all([repo.runsOf(job.id), repo.userNames(job.createdBy ? [job.createdBy] : [])]);
+    const views = await this.computeAll(this.results.session(), runs);
+    return { ...jobView(job, names), runs: views, totals: jobTotals(views) };
+  }
+
+  private async jobIn(repo: JobsRepository, id: string): Promise<Job> {
+    const job = await repo.findJob(id);
+    if (!job) throw AppError.notFound('There is no such job.');
+    return job;
+  }
+
+  private async runIn(repo: JobsRepository, id: string): Promise<JobRun> {
+    const run = await repo.findRun(id);
+    if (!run) throw AppError.notFound('There is no such run.');
+    return run;
+  }
+
+  async detail(id: string): Promise<JobDetail> {
+    const repo = this.store.read();
+    return this.detailIn(repo, await this.jobIn(repo, id));
+  }
+
+  async run(id: string): Promise<RunView> {
+    const run = await this.runIn(this.store.read(), id);
+    return runView(run, await this.results.session().compute(runFieldsOf(run)));
+  }
+
+  /** The run computed with each candidate alloy and with its own, and each candidate's difference from its own. */
+  async compare(id: string, alloyIds: string[]): Promise<CompareView> {
+    const run = await this.runIn(this.store.read(), id);
+    const session = this.results.session();
+    const lookups = await Promise.all(alloyIds.map((a) => session.alloy(a)));
+    const bad = alloyIds.filter((_, i) => lookups[i].state !== 'published');
+    if (bad.length > 0) {
+      throw AppError.badRequest('invalid_query', 'Some alloys cannot be compared.', {
+        alloyIds: `No published alloy with id ${bad.join(', ')}`,
+      });
+    }
+    const fields = runFieldsOf(run);
+    // The joint is left out: the figures compared do not depend on it, and a slip member's data must not veto a candidate.
+    const opts = { withJoint: false };
+    const current = await session.compute(fields, fields.alloyId, opts);
+    const base = figuresOf(current);
+    const candidates = await Promise.all(
+      alloyIds.map(async (alloyId): Promise<CompareRow> => {
+        const c = await session.compute(fields, alloyId, opts);
+        const figures = figuresOf(c);
+        const difference =
+          figures && base
+            ? {
+                growthMm: figures.growthMm - base.growthMm,
+                marginC: figures.marginC - base.marginC,
+                massKg: figures.massKg - base.massKg,
+                materialCost: figures.currency === base.currency ? figures.materialCost - base.materialCost : null,
+              }
+            : null;
+        return { alloy: c.alloy, figures, problem: c.problem, difference };
+      }),
+    );
+    return { runId: run.id, current: { alloy: current.alloy, figures: base, problem: current.problem, difference: null }, candidates };
+  }
+
+  // ---- writing jobs ----
+
+  async createJob(input: JobCreateInput, actor: PublicUser | null): Promise<JobDetail> {
+    const now = new Date();
+    const id = randomUUID();
+    await this.store.write((repo) =>
+      repo.saveJob(repo.create(Job, { id, ...input, status: 'active', createdBy: actor?.id ?? null, createdAt: now, updatedAt: now })),
+    );
+    return this.detail(id);
+  }
+
+  async patchJob(id: string, patch: JobPatchInput): Promise<JobDetail> {
+    await this.store.write(async (repo) => {
+      const job = await this.jobIn(repo, id);
+      await repo.saveJob(Object.assign(job, patch, { updatedAt: new Date() }));
+    });
+    return this.detail(id);
+  }
+
+  // ---- writing runs ----
+
+  /** The job of a run about to change: it must exist and be open; its updatedAt follows the run. */
+  private async openJob(repo: JobsRepository, jobId: string): Promise<Job> {
+    const job = await this.jobIn(repo, jobId);
+    if (job.status === 'archived') {
+      throw AppError.conflict('job_archived', 'This job is archived. Unarchive it to change its runs.');
+    }
+    job.updatedAt = new Date();
+    await repo.saveJob(job);
+    return job;
+  }
+
+  /** Every alloy a run's inputs name must be published now; a run may keep a retired alloy only by leaving it alone. */
+  private async checkAlloys(session: ResultSession, fields: Partial<RunFields>): Promise<void> {
+    const named: [string, string][] = [];
+    if (fields.alloyId !== undefined) named.push(['alloyId', fields.alloyId]);
+    if (fields.joint?.type === 'slip') {
+      for (const side of ['inner', 'outer'] as const) {
+        const id = fields.joint[side].alloyId;
+        if (id) named.push([`joint.${side}.alloyId`, id]);
+      }
+    }
+    const errors: Record<string, string> = {};
+    for (const [path, id] of named) {
+      if ((await session.alloy(id)).state !== 'published') errors[path] = 'No published alloy with this id';
+    }
+    if (Object.keys(errors).length > 0) throw AppError.badRequest('invalid_input', 'Some values need attention.', errors);
+  }
+
+  private async answer(session: ResultSession, run: JobRun): Promise<RunView> {
+    return runView(run, await session.compute(runFieldsOf(run)));
+  }
+
+  private newRun(jobId: string, fields: RunFields, position: number): JobRun {
+    const now = new Date();
+    const run = Object.assign(new JobRun(), { id: randomUUID(), jobId, position, createdAt: now });
+    return applyFields(run, fields, now);
+  }
+
+  async createRun(jobId: string, input: RunCreateInput): Promise<RunView> {
+    const session = this.results.session();
+    const { position, ...fields } = input;
+    await this.checkAlloys(session, fields);
+    const run = await this.store.write(async (repo) => {
+      await this.openJob(repo, jobId);
+      const runs = await repo.runsOf(jobId);
+      if (position !== undefined && position > runs.length + 1) {
+        throw AppError.badRequest('invalid_input', 'Some values need attention.', { position: `Choose a position from 1 to ${runs.length + 1}` });
+      }
+      const created = this.newRun(jobId, fields, 0);
+      runs.splice((position ?? runs.length + 1) - 1, 0, created);
+      await repo.saveRuns(renumber(runs));
+      return created;
+    });
+    return this.answer(session, run);
+  }
+
+  async patchRun(id: string, patch: RunPatchInput): Promise<RunView> {
+    const session = this.results.session();
+    await this.checkAlloys(session, patch);
+    const run = await this.store.write(async (repo) => {
+      const run = await this.runIn(repo, id);
+      await this.openJob(repo, run.jobId);
+      // Validated again whole: a change to one field can break a check that spans fields.
+      const merged = runFieldsSchema.safeParse({ ...runFieldsOf(run), ...patch });
+      if (!merged.success) throw AppError.badRequest('invalid_input', 'Some values need attention.', fieldsFromZod(merged.error));
+      applyFields(run, merged.data, new Date());
+      await repo.saveRuns([run]);
+      return run;
+    });
+    return this.answer(session, run);
+  }
+
+  async deleteRun(id: string): Promise<void> {
+    await this.store.write(async (repo) => {
+      const run = await this.runIn(repo, id);
+      await this.openJob(repo, run.jobId);
+      await repo.deleteRun(run.id);
+      await repo.saveRuns(renumber((await repo.runsOf(run.jobId)).filter((r) => r.id !== run.id)));
+    });
+  }
+
+  /** A copy of the run placed right after it. */
+  async duplicateRun(id: string): Promise<RunView> {
+    const copy = await this.store.write(async (repo) => {
+      const original = await this.runIn(repo, id);
+      await this.openJob(repo, original.jobId);
+      const runs = await repo.runsOf(original.jobId);
+      const fields = runFieldsOf(original);
+      const created = this.newRun(original.jobId, { ...fields, name: `${fields.name} (copy)`.slice(0, 120) }, 0);
+      runs.splice(runs.findIndex((r) => r.id === original.id) + 1, 0, created);
+      await repo.saveRuns(renumber(runs));
+      return created;
+    });
+    return this.answer(this.results.session(), copy);
+  }
+
+  async reorderRuns(jobId: string, input: RunOrderInput): Promise<JobDetail> {
+    await this.store.write(async (repo) => {
+      await this.openJob(repo, jobId);
+      const runs = await repo.runsOf(jobId);
+      const byId = new Map(runs.map((r) => [r.id, r]));
+      const unique = new Set(input.runIds);
+      if (unique.size !== input.runIds.length || input.runIds.length !== runs.length || input.runIds.some((rid) => !byId.has(rid))) {
+        throw AppError.badRequest('invalid_input', 'Some values need attention.', {
+          runIds: `Name each of this job's ${runs.length} runs exactly once`,
+        });
+      }
+      await repo.saveRuns(renumber(input.runIds.map((rid) => byId.get(rid)!)));
+    });
+    return this.detail(jobId);
+  }
+}
+
+function applyFields(run: JobRun, fields: RunFields, now: Date): JobRun {
+  return Object.assign(run, {
+    name: fields.name,
+    alloyId: fields.alloyId,
+    odMm: fields.tube.odMm,
+    wallMm: fields.tube.wallMm,
+    installTempC: fields.installTempC,
+    segments: fields.segments.map((s) => ({ lengthMm: s.lengthMm, startTempC: s.startTempC, endTempC: s.endTempC })),
+    startFixing: fields.startFixing,
+    endFixing: fields.endFixing,
+    joint: fields.joint,
+    notes: fields.notes,
+    updatedAt: now,
+  });
+}

@@ -1,0 +1,135 @@
+import { calculateRun, isEngineInputError } from '../../shared/schemas/calc';
+import type { AlloyData, FlexPart, RunResult } from '../../shared/engine/types';
+import { runFields, toCalcRequest } from '../../shared/jobs/run-input';
+import type { AlloyUsed, RunFields, RunProblem } from '../../shared/schemas/jobs';
+import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
+import type { FlexPartsService } from '../flex-parts/flex-parts.service';
+import { AppError } from '../http/app-error';
+
+/** What the catalogue says about an alloy id right now. */
+export type AlloyLookup =
+  | { state: 'published'; used: AlloyUsed; published: PublishedAlloy }
+  | { state: 'retired'; used: AlloyUsed }
+  | { state: 'missing' };
+
+export interface Computed {
+  alloy: AlloyUsed | null;
+  result: RunResult | null;
+  problem: RunProblem | null;
+  currency: string | null;
+}
+
+const usedOf = (p: PublishedAlloy): AlloyUsed => ({ id: p.alloyId, designation: p.designation, uns: p.uns, version: p.version, status: 'published' });
+const named = (a: AlloyUsed) => `${a.designation} (${a.uns})`;
+
+/**
+ * One request's view of the catalogue: each alloy and the flex parts are read once however many
+ * runs use them, so every run of a job is computed against the same published data.
+ */
+export class ResultSession {
+  private readonly alloys = new Map<string, Promise<AlloyLookup>>();
+  private flexParts: Promise<FlexPart[]> | null = null;
+
+  constructor(
+    private readonly catalogue: CatalogueService,
+    private readonly flex: FlexPartsService,
+  ) {}
+
+  alloy(id: string): Promise<AlloyLookup> {
+    let found = this.alloys.get(id);
+    if (!found) {
+      found = this.lookUp(id);
+      this.alloys.set(id, found);
+    }
+    return found;
+  }
+
+  private async lookUp(id: string): Promise<AlloyLookup> {
+    try {
+      const published = await this.catalogue.publishedAlloy(id);
+      return { state: 'published', used: usedOf(published), published };
+    } catch (err) {
+      if (!(err instanceof AppError && err.status === 404)) throw err;
+    }
+    try {
+      // A retired alloy keeps its last published version: name it so the shop knows what to replace.
+      const detail = await this.catalogue.detail(id, null);
+      const p = detail.published;
+      if (p) return { state: 'retired', used: { id, designation: p.designation, uns: p.uns, version: p.version, status: 'retired' } };
+    } catch (err) {
+      if (!(err instanceof AppError && err.status === 404)) throw err;
+    }
+    return { state: 'missing' };
+  }
+
+  private parts(): Promise<FlexPart[]> {
+    this.flexParts ??= this.flex.forSizing();
+    return this.flexParts;
+  }
+
+  /** The run computed with `alloyId`'s latest published data (the run's own alloy unless a candidate is given). */
+  async compute(run: RunFields, alloyId = run.alloyId, opts: { withJoint: boolean } = { withJoint: true }): Promise<Computed> {
+    const main = await this.alloy(alloyId);
+    if (main.state !== 'published') {
+      return { alloy: main.state === 'retired' ? main.used : null, result: null, problem: unavailable(main, 'alloyId', 'this run'), currency: null };
+    }
+    const fields: RunFields = { ...run, alloyId, joint: opts.withJoint ? run.joint : { type: 'none' } };
+    const slipAlloys: { inner?: AlloyData; outer?: AlloyData } = {};
+    if (fields.joint.type === 'slip') {
+      for (const side of ['inner', 'outer'] as const) {
+        const id = fields.joint[side].alloyId;
+        if (!id) continue;
+        const member = await this.alloy(id);
+        if (member.state !== 'published') {
+          return { alloy: main.used, result: null, problem: unavailable(member, `joint.${side}.alloyId`, `the slip joint's ${side} member`), currency: null };
+        }
+        slipAlloys[side] = member.published.data;
+      }
+    }
+    const flexParts = fields.joint.type === 'flex' ? await this.parts() : undefined;
+    try {
+      const result = calculateRun(toCalcRequest(fields), main.published.data, { flexParts, slipAlloys });
+      return { alloy: main.used, result, problem: null, currency: main.published.currency };
+    } catch (err) {
+      if (!isEngineInputError(err)) throw err;
+      const mapped = runFields(err.fields);
+      const first = Object.values(mapped)[0] ?? err.message;
+      return {
+        alloy: main.used,
+        result: null,
+        problem: {
+          code: 'outside_data',
+          message: `The published data of ${named(main.used)}, version ${main.used.version}, does not cover this run: ${first}.`,
+          fields: mapped,
+        },
+        currency: main.published.currency,
+      };
+    }
+  }
+}
+
+function unavailable(lookup: Exclude<AlloyLookup, { state: 'published' }>, field: string, what: string): RunProblem {
+  if (lookup.state === 'retired') {
+    return {
+      code: 'alloy_retired',
+      message: `${named(lookup.used)}, the alloy of ${what}, has been retired from the catalogue. Choose another alloy.`,
+      fields: { [field]: 'This alloy has been retired' },
+    };
+  }
+  return {
+    code: 'alloy_unavailable',
+    message: `The alloy of ${what} has no published data in the catalogue. Choose another alloy.`,
+    fields: { [field]: 'No published alloy with this id' },
+  };
+}
+
+export class RunResults {
+  constructor(
+    private readonly catalogue: CatalogueService,
+    private readonly flexParts: FlexPartsService,
+  ) {}
+
+  session(): ResultSession {
+    return new ResultSession(this.catalogue, this.flexParts);
+  }
+}

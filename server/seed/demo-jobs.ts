@@ -1,0 +1,162 @@
+import type { DataSource } from 'typeorm';
+import { runCreateSchema, jobCreateSchema, type RunCreateInput } from '../../shared/schemas/jobs';
+import { CatalogueStore } from '../catalogue/catalogue.repository';
+import { CatalogueService } from '../catalogue/catalogue.service';
+import { FlexPartsRepository } from '../flex-parts/flex-parts.repository';
+import { FlexPartsService } from '../flex-parts/flex-parts.service';
+import { JobsStore } from '../jobs/jobs.repository';
+import { JobsService } from '../jobs/jobs.service';
+import { RunResults } from '../jobs/run-results';
+import { UsersRepository } from '../users/users.repository';
+import { toPublicUser } from '../users/users.service';
+
+/** Common exhaust tube: OD in inches × 16 ga (0.065 in) wall, in mm. */
+const TUBE_63 = { odMm: 63.5, wallMm: 1.651 };
+const TUBE_76 = { odMm: 76.2, wallMm: 1.651 };
+/** 6 in × 14 ga (0.083 in) for the dryer's hot-air duct. */
+const TUBE_152 = { odMm: 152.4, wallMm: 2.108 };
+
+type DemoRun = Omit<RunCreateInput, 'alloyId' | 'installTempC' | 'joint' | 'notes'> & {
+  uns: string;
+  joint?: RunCreateInput['joint'];
+  notes?: string;
+};
+
+interface DemoJob {
+  name: string;
+  customer: string;
+  application: string;
+  notes: string;
+  runs: DemoRun[];
+}
+
+/**
+ * The invented shop's three jobs. Wall temperatures sit below the gas: pre-turbine gas 900–1050 °C,
+ * downpipe wall ~700–850 °C, tailpipe a few hundred, installed at 20 °C.
+ */
+export const DEMO_JOBS: DemoJob[] = [
+  {
+    name: 'Hill-climb special: turbo exhaust',
+    customer: 'Fellmoor Hill-Climb Works',
+    application: 'Turbo exhaust for a home-built hill-climb car, 2.0 L turbocharged four',
+    notes: 'Invented demo job. Customer wants the collector in nickel alloy; rest of the system stainless.',
+    runs: [
+      {
+        name: 'Manifold collector',
+        uns: 'N06625',
+        tube: TUBE_63,
+        segments: [
+          { lengthMm: 180, startTempC: 900, endTempC: 890 },
+          { lengthMm: 160, startTempC: 890, endTempC: 870 },
+        ],
+        startFixing: 'manifold_flange',
+        endFixing: 'turbo_inlet',
+      },
+      {
+        name: 'Turbo downpipe',
+        uns: 'S32100',
+        tube: TUBE_76,
+        segments: [
+          { lengthMm: 250, startTempC: 820, endTempC: 780 },
+          { lengthMm: 350, startTempC: 780, endTempC: 700 },
+        ],
+        startFixing: 'turbo_outlet',
+        endFixing: 'v_band',
+        joint: { type: 'flex', atMm: 300 },
+        notes: 'Flex section 300 mm from the turbo outlet; support the flex on both sides, never let it carry weight.',
+      },
+      {
+        name: 'Mid-pipe',
+        uns: 'S30400',
+        tube: TUBE_76,
+        segments: [{ lengthMm: 900, startTempC: 640, endTempC: 520 }],
+        startFixing: 'v_band',
+        endFixing: 'slip_joint',
+        joint: { type: 'slip', inner: { tempC: 520 }, outer: { tempC: 480 }, coldClearanceMm: 0.3, coldEngagementMm: 90, coldAxialGapMm: 25 },
+      },
+      {
+        name: 'Tailpipe',
+        uns: 'S40910',
+        tube: TUBE_76,
+        segments: [{ lengthMm: 1100, startTempC: 420, endTempC: 260 }],
+        startFixing: 'slip_joint',
+        endFixing: 'free_end',
+      },
+    ],
+  },
+  {
+    name: 'Road car downpipe',
+    customer: 'Odile Marchetti-Brandt (private customer)',
+    application: 'Replacement downpipe for a road car, 1.6 L turbocharged hatchback',
+    notes: 'Invented demo job.',
+    runs: [
+      {
+        name: 'Downpipe, turbo to flex',
+        uns: 'S32100',
+        tube: TUBE_63,
+        segments: [{ lengthMm: 320, startTempC: 780, endTempC: 740 }],
+        startFixing: 'turbo_outlet',
+        endFixing: 'flex_section',
+        joint: { type: 'flex', atMm: 320 },
+      },
+      {
+        name: 'Downpipe, flex to catalyst flange',
+        uns: 'S30400',
+        tube: TUBE_63,
+        segments: [{ lengthMm: 560, startTempC: 740, endTempC: 640 }],
+        startFixing: 'flex_section',
+        endFixing: 'flange',
+      },
+    ],
+  },
+  {
+    name: 'Dryer hot-air duct',
+    customer: 'Brackenridge Grain & Seed Co-operative',
+    application: 'Hot-air duct from the burner box to the drying drum of an industrial grain dryer',
+    notes: 'Invented demo job. Duct hangs from sliding brackets; one slip joint takes up the growth.',
+    runs: [
+      {
+        name: 'Burner box to slip joint',
+        uns: 'S30400',
+        tube: TUBE_152,
+        segments: [{ lengthMm: 3000, startTempC: 480, endTempC: 450 }],
+        startFixing: 'equipment_nozzle',
+        endFixing: 'slip_joint',
+        joint: { type: 'slip', inner: { tempC: 450 }, outer: { tempC: 430 }, coldClearanceMm: 0.5, coldEngagementMm: 160, coldAxialGapMm: 40 },
+      },
+      {
+        name: 'Slip joint to drum inlet',
+        uns: 'S30400',
+        tube: TUBE_152,
+        segments: [{ lengthMm: 2400, startTempC: 450, endTempC: 420 }],
+        startFixing: 'slip_joint',
+        endFixing: 'equipment_nozzle',
+      },
+    ],
+  },
+];
+
+/** Idempotent: adds the demo jobs whose names are missing, as the demo fabricator. Returns how many were added. */
+export async function seedDemoJobs(dataSource: DataSource): Promise<number> {
+  const fabricator = await new UsersRepository(dataSource).findByEmail('fabricator@dilato.test');
+  if (!fabricator) throw new Error('seed demo users before the demo jobs');
+  const catalogueStore = new CatalogueStore(dataSource);
+  const catalogue = new CatalogueService(catalogueStore);
+  const store = new JobsStore(dataSource);
+  const jobs = new JobsService(store, new RunResults(catalogue, new FlexPartsService(new FlexPartsRepository(dataSource))));
+
+  let added = 0;
+  for (const demo of DEMO_JOBS) {
+    if (await store.read().findJobByName(demo.name)) continue;
+    const alloyIds = await Promise.all(demo.runs.map(async (r) => (await catalogueStore.read().findAlloyByUns(r.uns))?.id));
+    // Without the reference catalogue (SEED_CATALOGUE=false) the demo alloys are not there to build with.
+    if (alloyIds.some((id) => id === undefined)) continue;
+    const { runs, ...fields } = demo;
+    const job = await jobs.createJob(jobCreateSchema.parse(fields), toPublicUser(fabricator));
+    for (const [i, { uns: _uns, ...run }] of runs.entries()) {
+      await jobs.createRun(job.id, runCreateSchema.parse({ ...run, alloyId: alloyIds[i] }));
+    }
+    added += 1;
+  }
+  return added;
+}

@@ -1,0 +1,261 @@
+import { z } from 'zod';
+import { FIXED_POINT_IDS } from '../jobs/fixed-points';
+import { runFieldPath, toCalcRequest } from '../jobs/run-input';
+import type { LimitStatus, RunResult } from '../engine/types';
+import { calcRunRequestSchema, flexOptionsSchema, segmentSchema, slipOptionsSchema, tubeSchema } from './calc';
+
+const text = (what: string, max: number) =>
+  z
+    .string({ error: `Enter ${what}` })
+    .trim()
+    .min(1, { error: `Enter ${what}` })
+    .max(max, { error: `Use at most ${max} characters` });
+const notes = z.string({ error: 'Notes must be text' }).trim().max(4000, { error: 'Use at most 4000 characters' });
+
+// ---- jobs ----
+
+export const JOB_STATUSES = ['active', 'archived'] as const;
+export const jobStatusSchema = z.enum(JOB_STATUSES, { error: 'Choose active or archived' });
+export type JobStatus = z.infer<typeof jobStatusSchema>;
+
+const jobFields = {
+  name: text('a job name', 120),
+  customer: text('the customer', 120),
+  application: text('the application', 200),
+  notes,
+};
+
+/** Body of POST /api/jobs. */
+export const jobCreateSchema = z.object({ ...jobFields, notes: notes.default('') });
+export type JobCreateInput = z.infer<typeof jobCreateSchema>;
+
+/** Body of PATCH /api/jobs/:id: any of the fields, and the status (archive / unarchive). */
+export const jobPatchSchema = z
+  .object({ ...jobFields, status: jobStatusSchema })
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, { error: 'Change at least one thing' });
+export type JobPatchInput = z.infer<typeof jobPatchSchema>;
+
+/** Query of GET /api/jobs. The default list hides archived jobs. */
+export const jobListQuerySchema = z.object({
+  search: z.string().trim().max(100).optional(),
+  status: z.enum(['active', 'archived', 'all'], { error: 'Use active, archived or all' }).default('active'),
+});
+export type JobListQuery = z.infer<typeof jobListQuerySchema>;
+
+// ---- runs ----
+
+export const fixedPointSchema = z.enum(FIXED_POINT_IDS, { error: 'Choose what holds this end' });
+
+const calcSlipMember = slipOptionsSchema.shape.inner.shape;
+/** A slip member names a published alloy (absent = the run's own alloy); runs keep no inline alloy data. */
+const slipMember = z.object({
+  alloyId: calcSlipMember.alloyId,
+  diameterMm: calcSlipMember.diameterMm,
+  tempC: calcSlipMember.tempC,
+});
+
+/** The joint fitted in the run and its settings: none, a flex section, or a slip joint (slip inputs of the calculator). */
+export const jointSchema = z.discriminatedUnion(
+  'type',
+  [
+    z.object({ type: z.literal('none') }),
+    z.object({
+      type: z.literal('flex'),
+      movementMargin: flexOptionsSchema.shape.movementMargin,
+      atMm: flexOptionsSchema.shape.atMm,
+    }),
+    slipOptionsSchema.extend({ type: z.literal('slip'), inner: slipMember, outer: slipMember }),
+  ],
+  { error: 'Choose none, flex or slip' },
+);
+export type Joint = z.infer<typeof jointSchema>;
+export type JointType = Joint['type'];
+
+const runFieldsShape = {
+  name: text('a run name', 120),
+  alloyId: z.string({ error: 'Choose an alloy' }).min(1, { error: 'Choose an alloy' }),
+  tube: tubeSchema,
+  installTempC: segmentSchema.shape.startTempC,
+  segments: z
+    .array(segmentSchema, { error: 'Add at least one segment' })
+    .min(1, { error: 'Add at least one segment' })
+    .max(50, { error: 'Use at most 50 segments' }),
+  startFixing: fixedPointSchema,
+  endFixing: fixedPointSchema,
+  joint: jointSchema,
+  notes,
+};
+
+const runFieldsObject = z.object(runFieldsShape);
+export type RunFields = z.infer<typeof runFieldsObject>;
+
+/** The checks that span fields (flex position within the run, sleeve bore), as the calculator makes them. */
+function crossChecks(run: RunFields, ctx: z.RefinementCtx): void {
+  const parsed = calcRunRequestSchema.safeParse(toCalcRequest(run));
+  if (parsed.success) return;
+  for (const issue of parsed.error.issues) {
+    ctx.addIssue({ code: 'custom', path: runFieldPath(issue.path.map(String).join('.')).split('.'), message: issue.message });
+  }
+}
+
+/** A whole run's inputs: what PATCH merges into and validates again. */
+export const runFieldsSchema = runFieldsObject.superRefine(crossChecks);
+
+/** Body of POST /api/jobs/:id/runs. Appended at the end unless `position` (1-based) is given. */
+export const runCreateSchema = z
+  .object({
+    ...runFieldsShape,
+    installTempC: runFieldsShape.installTempC.default(20),
+    startFixing: fixedPointSchema.default('flange'),
+    endFixing: fixedPointSchema.default('flange'),
+    joint: jointSchema.default({ type: 'none' }),
+    notes: notes.default(''),
+    position: z.number({ error: 'Enter a whole number' }).int({ error: 'Enter a whole number' }).min(1, { error: 'Positions start at 1' }).optional(),
+  })
+  .superRefine(crossChecks);
+export type RunCreateInput = z.infer<typeof runCreateSchema>;
+
+/** Body of PATCH /api/runs/:id: any inputs; tube, segments and joint are replaced whole. */
+export const runPatchSchema = runFieldsObject
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, { error: 'Change at least one thing' });
+export type RunPatchInput = z.infer<typeof runPatchSchema>;
+
+/** Body of PUT /api/jobs/:id/runs/order: every run of the job, once each, in the new order. */
+export const runOrderSchema = z.object({
+  runIds: z.array(z.string().min(1), { error: 'List the runs in their new order' }).min(1, { error: 'List the runs in their new order' }),
+});
+export type RunOrderInput = z.infer<typeof runOrderSchema>;
+
+export const COMPARE_MIN = 2;
+export const COMPARE_MAX = 4;
+
+/** Query of GET /api/runs/:id/compare: alloyIds=a,b,c (2–4 distinct published alloys). */
+export const compareQuerySchema = z.object({
+  alloyIds: z
+    .string({ error: `Choose ${COMPARE_MIN} to ${COMPARE_MAX} alloys` })
+    .transform((s) => s.split(',').map((id) => id.trim()).filter((id) => id.length > 0))
+    .pipe(
+      z
+        .array(z.string())
+        .min(COMPARE_MIN, { error: `Choose ${COMPARE_MIN} to ${COMPARE_MAX} alloys` })
+        .max(COMPARE_MAX, { error: `Choose ${COMPARE_MIN} to ${COMPARE_MAX} alloys` })
+        .refine((ids) => new Set(ids).size === ids.length, { error: 'Choose each alloy once' }),
+    ),
+});
+export type CompareQuery = z.infer<typeof compareQuerySchema>;
+
+// ---- what the API answers ----
+
+/** The alloy data a result was computed with. `status` is 'retired' when the alloy left the catalogue. */
+export interface AlloyUsed {
+  id: string;
+  designation: string;
+  uns: string;
+  version: number;
+  status: 'published' | 'retired';
+}
+
+/** Why a run has no result: its alloy is gone, or its data does not cover the run. `fields` use run paths. */
+export interface RunProblem {
+  code: 'alloy_retired' | 'alloy_unavailable' | 'outside_data';
+  message: string;
+  fields?: Record<string, string>;
+}
+
+export interface RunView extends RunFields {
+  id: string;
+  jobId: string;
+  position: number;
+  /** null only when the alloy id is not in the catalogue at all. */
+  alloy: AlloyUsed | null;
+  /** Computed on every read from the latest published data of the alloy; null when `problem` is set. */
+  result: RunResult | null;
+  problem: RunProblem | null;
+  /** Currency of materialCost (the alloy's price currency). */
+  currency: string | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface JobTotals {
+  /** Sums over the runs that have a result. */
+  growthMm: number;
+  massKg: number;
+  /** null when the runs' prices are in different currencies. */
+  materialCost: number | null;
+  currency: string | null;
+  /** Sum of every run's segment lengths. */
+  lengthMm: number;
+  /** Highest segment temperature of any run; null for a job with no runs. */
+  peakTempC: number | null;
+  runCount: number;
+  /** Runs left out of the growth, mass and cost sums because they have a problem. */
+  runsWithProblems: number;
+}
+
+export interface JobView {
+  id: string;
+  name: string;
+  customer: string;
+  application: string;
+  status: JobStatus;
+  notes: string;
+  createdBy: { id: string; name: string } | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface JobDetail extends JobView {
+  runs: RunView[];
+  totals: JobTotals;
+}
+
+export interface JobSummary {
+  id: string;
+  name: string;
+  customer: string;
+  application: string;
+  status: JobStatus;
+  runCount: number;
+  totalGrowthMm: number;
+  totalMassKg: number;
+  peakTempC: number | null;
+  runsWithProblems: number;
+  updatedAt: string;
+}
+
+export interface CompareFigures {
+  growthMm: number;
+  limitStatus: LimitStatus;
+  marginC: number;
+  stressRatio: number | null;
+  worstStressRatio: number | null;
+  jointNeeded: boolean | null;
+  massKg: number;
+  materialCost: number;
+  currency: string;
+}
+
+export interface CompareDifference {
+  growthMm: number;
+  marginC: number;
+  massKg: number;
+  /** null when the two prices are in different currencies. */
+  materialCost: number | null;
+}
+
+export interface CompareRow {
+  alloy: AlloyUsed | null;
+  figures: CompareFigures | null;
+  problem: RunProblem | null;
+  /** This row minus the run's current alloy; null for the current row and where either has no figures. */
+  difference: CompareDifference | null;
+}
+
+export interface CompareView {
+  runId: string;
+  current: CompareRow;
+  candidates: CompareRow[];
+}
