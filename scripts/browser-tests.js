@@ -52,7 +52,8 @@ async function main() {
     const jest = spawnSync(
       path.join(root, 'node_modules', '.bin', 'jest'),
       ['-c', 'jest.browser.config.js', '--runInBand', ...process.argv.slice(2)],
-      { cwd: root, stdio: 'inherit', env: { ...process.env, DILATO_BASE_URL: baseUrl } },
+      // DILATO_DATA_DIR lets a test set up what no API offers (e.g. backdating a quote to test expiry).
+      { cwd: root, stdio: 'inherit', env: { ...process.env, DILATO_BASE_URL: baseUrl, DILATO_DATA_DIR: dataDir } },
     );
     status = jest.status ?? 1;
   } finally {

@@ -4,6 +4,9 @@ import { createApp } from './app';
 import { ConfigError, loadConfig } from './config';
 import { openDatabase } from './db/data-source';
 import { seed } from './seed/seed';
+import { startFakeSmtp } from './mail/fake-smtp';
+import { Mailer } from './mail/mailer';
+import { OutboxRepository } from './mail/outbox.repository';
 
 async function main() {
   const startedAt = Date.now();
@@ -12,8 +15,12 @@ async function main() {
 
   const dataSource = await openDatabase(config.databasePath);
   const report = await seed(dataSource, { demo: config.seedDemo, catalogue: config.seedCatalogue });
+  // Without SMTP_URL, e-mail goes to an SMTP server of our own that keeps it in the outbox.
+  const fakeSmtp = config.smtpUrl ? null : await startFakeSmtp(new OutboxRepository(dataSource));
+  const mailer = new Mailer(config.smtpUrl ?? fakeSmtp!.url);
   const app = createApp(dataSource, {
     uploadsDir: config.uploadsDir,
+    mailer,
     webDir: config.webDir,
     publicUrl: config.publicUrl,
     trustProxy: config.trustProxy,
@@ -28,7 +35,8 @@ async function main() {
 
   const stop = () => {
     server.close(() => {
-      void dataSource.destroy().finally(() => process.exit(0));
+      mailer.close();
+      void Promise.all([fakeSmtp?.close(), dataSource.destroy()]).finally(() => process.exit(0));
     });
   };
   process.on('SIGTERM', stop);

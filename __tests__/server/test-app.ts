@@ -7,6 +7,9 @@ import { createApp, type AppOptions } from '../../server/app';
 import { openDatabase } from '../../server/db/data-source';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/seed/demo-users';
 import { seed } from '../../server/seed/seed';
+import { startFakeSmtp } from '../../server/mail/fake-smtp';
+import { Mailer } from '../../server/mail/mailer';
+import { OutboxRepository } from '../../server/mail/outbox.repository';
 import type { Role } from '../../shared/schemas/auth';
 
 export const HOST = 'dilato.test';
@@ -29,12 +32,16 @@ export async function createTestApp(options: TestOptions = {}): Promise<TestApp>
   const dataSource = await openDatabase(':memory:');
   await seed(dataSource, { demo: options.demo ?? true, catalogue: options.catalogue ?? true });
   const uploadsDir = options.uploadsDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-uploads-'));
-  const app = createApp(dataSource, { ...options, uploadsDir });
+  const smtp = await startFakeSmtp(new OutboxRepository(dataSource));
+  const mailer = new Mailer(smtp.url);
+  const app = createApp(dataSource, { ...options, uploadsDir, mailer });
   return {
     app,
     dataSource,
     uploadsDir,
     close: async () => {
+      mailer.close();
+      await smtp.close();
       await dataSource.destroy();
       fs.rmSync(uploadsDir, { recursive: true, force: true });
     },

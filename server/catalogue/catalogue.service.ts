@@ -7,6 +7,7 @@ import type { PublicUser } from '../../shared/schemas/auth';
 import {
   alloyInputSchema,
   type AlloyDetail,
+  type AlloyFamily,
   type AlloyInput,
   type AlloyListQuery,
   type AlloyPatch,
@@ -35,6 +36,7 @@ export interface PublishedAlloy {
   alloyId: string;
   designation: string;
   uns: string;
+  family: AlloyFamily;
   version: number;
   versionId: string;
   data: AlloyData;
@@ -180,6 +182,7 @@ export class CatalogueService {
       alloyId: alloy.id,
       designation: v.designation,
       uns: v.uns,
+      family: v.family,
       version: v.version,
       versionId: v.versionId,
       data: toAlloyData(v),

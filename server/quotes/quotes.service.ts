@@ -1,0 +1,353 @@
+import { createHash, randomBytes, randomUUID } from 'node:crypto';
+import { peakTempC } from '../../shared/engine/limits';
+import { compareWithFirst, priceOption, type PricedAlloy, type PricedRunInput } from '../../shared/quotes/pricing';
+import { FAMILY_LABELS } from '../../shared/schemas/alloy';
+import type { PublicUser } from '../../shared/schemas/auth';
+import type { PublicQuoteView, QuoteInput, QuotePricing, QuoteStatus, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
+import type { CatalogueService } from '../catalogue/catalogue.service';
+import { AppError } from '../http/app-error';
+import type { JobsStore } from '../jobs/jobs.repository';
+import type { Mailer } from '../mail/mailer';
+import type { ShopSettingsService } from '../settings/shop-settings.service';
+import type { UsersRepository } from '../users/users.repository';
+import { decisionMail, money, quoteMail } from './quote-emails';
+import { Quote } from './quote.entities';
+import type { QuotesRepository, QuotesStore } from './quotes.repository';
+
+type Actor = Pick<PublicUser, 'id' | 'name' | 'role'>;
+
+export const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
+const today = () => new Date().toISOString().slice(0, 10);
+const OPEN: QuoteStatus[] = ['sent', 'viewed'];
+
+function alloyIdsOf(options: Quote['options']): string[] {
+  return [...new Set(options.flatMap((o) => [o.alloyId, ...Object.values(o.runAlloys ?? {})]))];
+}
+
+export class QuotesService {
+  constructor(
+    private readonly store: QuotesStore,
+    private readonly jobs: JobsStore,
+    private readonly catalogue: CatalogueService,
+    private readonly settings: ShopSettingsService,
+    private readonly users: UsersRepository,
+    private readonly mailer: Mailer,
+  ) {}
+
+  // ---- pricing ----
+
+  private async jobRuns(jobId: string): Promise<{ jobName: string; runs: PricedRunInput[] }> {
+    const repo = this.jobs.read();
+    const job = await repo.findJob(jobId);
+    if (!job) throw AppError.badRequest('invalid_input', 'Some values need attention.', { jobId: 'There is no such job' });
+    const runs = (await repo.runsOf(jobId)).map((r) => ({
+      runId: r.id,
+      name: r.name,
+      lengthMm: r.segments.reduce((sum, s) => sum + s.lengthMm, 0),
+      tube: { odMm: r.odMm, wallMm: r.wallMm },
+      peakTempC: peakTempC(r.segments),
+    }));
+    return { jobName: job.name, runs };
+  }
+
+  /** Prices the options from the job's runs and today's published catalogue and shop settings. */
+  private async priceNow(quote: Pick<Quote, 'jobId' | 'options'>): Promise<QuotePricing> {
+    const [{ runs }, settings] = await Promise.all([this.jobRuns(quote.jobId), this.settings.get()]);
+    if (runs.length === 0) throw AppError.badRequest('job_has_no_runs', 'The job has no runs to quote yet.', { jobId: 'The job has no runs yet' });
+    const alloys = new Map<string, PricedAlloy>();
+    for (const id of alloyIdsOf(quote.options)) {
+      try {
+        const a = await this.catalogue.publishedAlloy(id);
+        alloys.set(id, {
+          alloyId: id,
+          designation: a.designation,
+          uns: a.uns,
+          family: a.family,
+          version: a.version,
+          densityKgM3: a.data.densityKgM3,
+          pricePerKg: a.data.pricePerKg,
+          maxContinuousC: a.data.maxContinuousC,
+          maxIntermittentC: a.data.maxIntermittentC,
+        });
+      } catch {
+        const index = quote.options.findIndex((o) => alloyIdsOf([o]).includes(id));
+        throw AppError.badRequest('invalid_input', 'An option names an alloy that is not published.', { [`options.${index}.alloyId`]: 'Not a published alloy' });
+      }
+    }
+    const options = quote.options.map((o) => priceOption(runs, o, alloys, settings));
+    return {
+      currency: settings.currency,
+      settings,
+      runs,
+      alloys: [...alloys.values()],
+      options,
+      comparisons: compareWithFirst(options),
+      pricedAt: new Date().toISOString(),
+      frozen: false,
+    };
+  }
+
+  // ---- views ----
+
+  /** Quotes past their date stop being open; the change is written the first time anyone looks. */
+  private async expireIfDue(repo: QuotesRepository, quote: Quote): Promise<Quote> {
+    if (OPEN.includes(quote.status) && quote.validUntil < today()) {
+      quote.status = 'expired';
+      quote.updatedAt = new Date();
+      await repo.save(quote);
+      await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status: 'expired', note: `Valid until ${quote.validUntil}`, by: null, at: new Date() });
+    }
+    return quote;
+  }
+
+  private async view(repo: QuotesRepository, quote: Quote): Promise<QuoteView> {
+    let pricing: QuotePricing | null = quote.snapshot;
+    let pricingProblem: string | null = null;
+    if (!pricing) {
+      try {
+        pricing = await this.priceNow(quote);
+      } catch (err) {
+        pricingProblem = err instanceof AppError ? err.message : 'The quote could not be priced.';
+      }
+    }
+    const [job, events] = await Promise.all([this.jobs.read().findJob(quote.jobId), repo.eventsOf([quote.id])]);
+    return {
+      id: quote.id,
+      number: quote.number,
+      jobId: quote.jobId,
+      jobName: job?.name ?? '(job removed)',
+      customerName: quote.customerName,
+      customerEmail: quote.customerEmail,
+      customerCompany: quote.customerCompany,
+      validUntil: quote.validUntil,
+      message: quote.message,
+      status: quote.status,
+      options: quote.options,
+      pricing,
+      pricingProblem,
+      acceptedOptionIndex: quote.acceptedOptionIndex,
+      decidedBy: quote.decidedBy,
+      createdBy: quote.createdBy,
+      createdAt: new Date(quote.createdAt).toISOString(),
+      sentAt: quote.sentAt ? new Date(quote.sentAt).toISOString() : null,
+      events: events.map((e) => ({ at: new Date(e.at).toISOString(), status: e.status, note: e.note, by: e.by })),
+    };
+  }
+
+  async list(): Promise<QuoteSummary[]> {
+    const repo = this.store.read();
+    const quotes = await Promise.all((await repo.list()).map((q) => this.expireIfDue(repo, q)));
+    const jobNames = new Map<string, string>();
+    const items: QuoteSummary[] = [];
+    for (const q of quotes) {
+      if (!jobNames.has(q.jobId)) jobNames.set(q.jobId, (await this.jobs.read().findJob(q.jobId))?.name ?? '(job removed)');
+      let pricing = q.snapshot;
+      if (!pricing) pricing = await this.priceNow(q).catch(() => null);
+      const totals = pricing?.options.map((o) => o.total) ?? [];
+      items.push({
+        id: q.id,
+        number: q.number,
+        jobName: jobNames.get(q.jobId)!,
+        customerName: q.customerName,
+        customerCompany: q.customerCompany,
+        status: q.status,
+        validUntil: q.validUntil,
+        currency: pricing?.currency ?? '',
+        totalFrom: totals.length ? Math.min(...totals) : null,
+        totalTo: totals.length ? Math.max(...totals) : null,
+        updatedAt: new Date(q.updatedAt).toISOString(),
+      });
+    }
+    return items;
+  }
+
+  async get(id: string): Promise<QuoteView> {
+    const repo = this.store.read();
+    const quote = await repo.find(id);
+    if (!quote) throw AppError.notFound('There is no such quote.');
+    return this.view(repo, await this.expireIfDue(repo, quote));
+  }
+
+  // ---- sales ----
+
+  async create(input: QuoteInput, actor: Actor): Promise<QuoteView> {
+    await this.jobRuns(input.jobId);
+    return this.store.write(async (repo) => {
+      const now = new Date();
+      const number = `Q-${now.getUTCFullYear()}-${String((await repo.count()) + 1).padStart(4, '0')}`;
+      const quote = Object.assign(new Quote(), {
+        id: randomUUID(),
+        number,
+        ...input,
+        status: 'draft' as const,
+        snapshot: null,
+        tokenHash: null,
+        acceptedOptionIndex: null,
+        decidedBy: null,
+        createdBy: actor.id,
+        createdAt: now,
+        updatedAt: now,
+        sentAt: null,
+      });
+      await this.priceNow(quote);
+      await repo.save(quote);
+      await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status: 'draft', note: 'Created', by: actor.name, at: now });
+      return this.view(repo, quote);
+    });
+  }
+
+  async update(id: string, patch: Partial<QuoteInput>): Promise<QuoteView> {
+    return this.store.write(async (repo) => {
+      const quote = await repo.find(id);
+      if (!quote) throw AppError.notFound('There is no such quote.');
+      if (quote.status !== 'draft') throw AppError.conflict('not_draft', 'A sent quote cannot be changed; make a new one.');
+      Object.assign(quote, patch, { updatedAt: new Date() });
+      if (patch.jobId) await this.jobRuns(patch.jobId);
+      await this.priceNow(quote);
+      await repo.save(quote);
+      return this.view(repo, quote);
+    });
+  }
+
+  private mailFor(quote: Quote, jobName: string, pricing: QuotePricing, link: string) {
+    return quoteMail(
+      { number: quote.number, shopName: pricing.settings.shopName, customerName: quote.customerName, jobName, validUntil: quote.validUntil, message: quote.message, link, pricing },
+      quote.customerEmail,
+    );
+  }
+
+  async emailPreview(id: string, origin: string) {
+    const quote = await this.store.read().find(id);
+    if (!quote) throw AppError.notFound('There is no such quote.');
+    const pricing = quote.snapshot ?? (await this.priceNow(quote));
+    const { jobName } = await this.jobRuns(quote.jobId);
+    return this.mailFor(quote, jobName, pricing, `${origin}/q/…`);
+  }
+
+  /** Freezes the prices, makes the customer's private link and e-mails it. */
+  async send(id: string, actor: Actor, origin: string): Promise<QuoteView> {
+    const quote = await this.store.read().find(id);
+    if (!quote) throw AppError.notFound('There is no such quote.');
+    if (quote.status !== 'draft') throw AppError.conflict('not_draft', 'This quote has already been sent.');
+    if (quote.validUntil < today()) throw AppError.badRequest('invalid_input', 'The quote’s date has passed.', { validUntil: 'Choose a date from today on' });
+    const pricing: QuotePricing = { ...(await this.priceNow(quote)), frozen: true };
+    const { jobName } = await this.jobRuns(quote.jobId);
+    const token = randomBytes(32).toString('base64url');
+    await this.mailer.send(this.mailFor(quote, jobName, pricing, `${origin}/q/${token}`));
+    return this.store.write(async (repo) => {
+      Object.assign(quote, { status: 'sent', snapshot: pricing, tokenHash: hashToken(token), sentAt: new Date(), updatedAt: new Date() });
+      await repo.save(quote);
+      await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status: 'sent', note: `E-mailed to ${quote.customerEmail}`, by: actor.name, at: new Date() });
+      return this.view(repo, quote);
+    });
+  }
+
+  // ---- the customer, through the private link ----
+
+  private async byToken(repo: QuotesRepository, token: string): Promise<Quote> {
+    const quote = /^[A-Za-z0-9_-]{20,100}$/.test(token) ? await repo.findByTokenHash(hashToken(token)) : null;
+    if (!quote) throw new AppError(404, 'quote_not_found', 'This quote link is not valid.');
+    await this.expireIfDue(repo, quote);
+    if (quote.status === 'expired') throw new AppError(410, 'quote_expired', `This quote expired on ${quote.validUntil}.`);
+    return quote;
+  }
+
+  private async publicView(quote: Quote): Promise<PublicQuoteView> {
+    const pricing = quote.snapshot!;
+    const alloys = new Map(pricing.alloys.map((a) => [a.alloyId, a]));
+    const { jobName } = await this.jobRuns(quote.jobId).catch(() => ({ jobName: 'your system' }));
+    const hottest = Math.max(...pricing.runs.map((r) => r.peakTempC));
+    return {
+      number: quote.number,
+      shopName: pricing.settings.shopName,
+      customerName: quote.customerName,
+      customerCompany: quote.customerCompany,
+      jobName,
+      validUntil: quote.validUntil,
+      message: quote.message,
+      status: quote.status,
+      currency: pricing.currency,
+      acceptedOptionIndex: quote.acceptedOptionIndex,
+      options: pricing.options.map((o, i) => ({
+        label: o.label,
+        total: o.total,
+        costDifference: pricing.comparisons[i].costDifference,
+        costDifferencePct: pricing.comparisons[i].costDifferencePct,
+        massKg: o.massKg,
+        massDifferenceKg: pricing.comparisons[i].massDifferenceKg,
+        tempMarginC: o.tempMarginC,
+        tempMarginGainedC: pricing.comparisons[i].tempMarginGainedC,
+        alloys: [...new Set(o.runs.map((r) => r.alloyId))].map((id) => {
+          const a = alloys.get(id)!;
+          const limit = Math.min(a.maxContinuousC, a.maxIntermittentC);
+          const hand = limit - hottest;
+          return {
+            designation: a.designation,
+            uns: a.uns,
+            familyLabel: FAMILY_LABELS[a.family],
+            serviceLimitC: limit,
+            densityKgM3: a.densityKgM3,
+            plainWords:
+              `${a.designation} (${FAMILY_LABELS[a.family].toLowerCase()}) is good for about ${Math.round(limit)} °C in air. ` +
+              (hand >= 0
+                ? `The hottest part of your system runs at about ${Math.round(hottest)} °C, which leaves ${Math.round(hand)} °C in hand.`
+                : `The hottest part of your system runs at about ${Math.round(hottest)} °C, above what it is rated for: ask us before choosing it there.`) +
+              ` It weighs ${(a.densityKgM3 / 1000).toFixed(2)} kg per litre of metal.`,
+          };
+        }),
+      })),
+    };
+  }
+
+  async openByToken(token: string): Promise<PublicQuoteView> {
+    return this.store.write(async (repo) => {
+      const quote = await this.byToken(repo, token);
+      if (quote.status === 'sent') {
+        Object.assign(quote, { status: 'viewed', updatedAt: new Date() });
+        await repo.save(quote);
+        await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status: 'viewed', note: 'Opened by the customer', by: null, at: new Date() });
+      }
+      return this.publicView(quote);
+    });
+  }
+
+  async decide(token: string, decision: { accept: true; optionIndex: number; name: string } | { accept: false; name: string; reason: string }, origin: string): Promise<PublicQuoteView> {
+    const result = await this.store.write(async (repo) => {
+      const quote = await this.byToken(repo, token);
+      if (!OPEN.includes(quote.status)) throw AppError.conflict('already_decided', `This quote was already ${quote.status}.`);
+      const pricing = quote.snapshot!;
+      if (decision.accept && !pricing.options[decision.optionIndex]) {
+        throw AppError.badRequest('invalid_input', 'Choose one of the options.', { optionIndex: 'There is no such option' });
+      }
+      const status: QuoteStatus = decision.accept ? 'accepted' : 'declined';
+      Object.assign(quote, { status, acceptedOptionIndex: decision.accept ? decision.optionIndex : null, decidedBy: decision.name, updatedAt: new Date() });
+      await repo.save(quote);
+      const note = decision.accept ? `Option ${decision.optionIndex + 1} (${pricing.options[decision.optionIndex].label})` : decision.reason || 'No reason given';
+      await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status, note, by: decision.name, at: new Date() });
+      return quote;
+    });
+    const seller = result.createdBy ? await this.users.findById(result.createdBy) : null;
+    if (seller) {
+      const pricing = result.snapshot!;
+      const option = decision.accept ? pricing.options[decision.optionIndex] : undefined;
+      const { jobName } = await this.jobRuns(result.jobId).catch(() => ({ jobName: '' }));
+      await this.mailer.send(
+        decisionMail(
+          {
+            number: result.number,
+            jobName,
+            customerName: result.customerName,
+            decidedBy: decision.name,
+            accepted: decision.accept,
+            optionLabel: option?.label,
+            total: option ? money(option.total, pricing.currency) : undefined,
+            reason: decision.accept ? undefined : decision.reason,
+            link: `${origin}/quotes/${result.id}`,
+          },
+          seller.email,
+        ),
+      );
+    }
+    return this.publicView(result);
+  }
+}

@@ -1,0 +1,41 @@
+import { z } from 'zod';
+import { ALLOY_FAMILIES, type AlloyFamily } from './alloy';
+
+const money = (what: string) => z.number({ error: `${what} must be a number` }).min(0, { error: `${what} cannot be negative` });
+const factor = z.number({ error: 'Enter a factor' }).min(0.1, { error: 'At least 0.1' }).max(10, { error: 'At most 10' });
+
+/** The shop's quoting rules, edited by an admin. */
+export const shopSettingsSchema = z.object({
+  shopName: z.string({ error: 'Enter the shop’s name' }).trim().min(1, { error: 'Enter the shop’s name' }).max(120),
+  currency: z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, { error: 'Use a three-letter currency code' }),
+  labourRatePerHour: money('Labour rate'),
+  hoursPerRun: z.number({ error: 'Enter hours' }).min(0, { error: 'Cannot be negative' }).max(200, { error: 'At most 200 hours' }),
+  /** Welding and fitting time of each family relative to austenitic stainless (= 1). */
+  weldTimeFactors: z.object(
+    Object.fromEntries(ALLOY_FAMILIES.map((f) => [f, factor])) as Record<AlloyFamily, typeof factor>,
+  ),
+  scrapAllowancePct: z.number({ error: 'Enter a percentage' }).min(0, { error: 'Cannot be negative' }).max(100, { error: 'At most 100 %' }),
+  marginPct: z.number({ error: 'Enter a percentage' }).min(0, { error: 'Cannot be negative' }).max(300, { error: 'At most 300 %' }),
+  /** True while the values are the seeded demo numbers rather than the shop's own. */
+  isDemo: z.boolean().default(false),
+});
+export type ShopSettings = z.infer<typeof shopSettingsSchema>;
+
+/** Demo values of an invented shop; an admin replaces them with the shop's own. */
+export const DEMO_SHOP_SETTINGS: ShopSettings = {
+  shopName: 'Kestrel Lane Exhaust Works',
+  currency: 'EUR',
+  labourRatePerHour: 68,
+  hoursPerRun: 2.5,
+  weldTimeFactors: {
+    austenitic_stainless: 1,
+    ferritic_stainless: 0.9,
+    nickel_chromium: 1.6,
+    nickel_iron_chromium: 1.4,
+    titanium: 2.2,
+    carbon_steel: 0.7,
+  },
+  scrapAllowancePct: 12,
+  marginPct: 25,
+  isDemo: true,
+};
