@@ -29,7 +29,7 @@ async function main() {
   const server: Server = app.listen(config.port, () => {
     console.log(
       `[dilato] listening on http://localhost:${config.port} (data in ${config.dataDir}; ` +
-        `seeded: ${report.alloys} alloys, ${report.sources} sources, ${report.flexParts} flex parts, ${report.demoUsers} demo users; ready in ${Date.now() - startedAt} ms)`,
+        `seeded: ${report.alloys} alloys, ${report.sources} sources, ${report.flexParts} flex parts, ${report.demoUsers} demo users, ${report.demoJobs ?? 0} demo jobs; ready in ${Date.now() - startedAt} ms)`,
     );
   });
 
