@@ -1,4 +1,5 @@
 import { In, type DataSource, type EntityManager } from 'typeorm';
+import { build, Store } from '../db/store';
 import {
   Alloy,
   AlloyRevision,
@@ -93,19 +94,12 @@ export class CatalogueRepository {
   }
 
   create<T extends object>(entity: new () => T, fields: Partial<T>): T {
-    return Object.assign(new entity(), fields) as T;
+    return build(entity, fields);
   }
 }
 
-/** Hands out repositories: one on the shared connection for reads, one per transaction for writes. */
-export class CatalogueStore {
-  constructor(private readonly dataSource: DataSource) {}
-
-  read(): CatalogueRepository {
-    return new CatalogueRepository(this.dataSource.manager);
-  }
-
-  write<T>(work: (repo: CatalogueRepository) => Promise<T>): Promise<T> {
-    return this.dataSource.transaction((m) => work(new CatalogueRepository(m)));
+export class CatalogueStore extends Store<CatalogueRepository> {
+  constructor(dataSource: DataSource) {
+    super(dataSource, (m) => new CatalogueRepository(m));
   }
 }

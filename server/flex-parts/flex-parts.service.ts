@@ -32,16 +32,9 @@ export class FlexPartsService {
 
   /** The active parts, as the calculator's flex sizing reads them. */
   async forSizing(): Promise<FlexPart[]> {
-    return (await this.repo.list(true)).map((row) => ({
-      id: row.id,
-      name: `${row.code} ${row.name}`,
-      boreMm: row.boreMm,
-      liveLengthMm: row.liveLengthMm,
-      ratedAxialCompressionMm: row.ratedAxialCompressionMm,
-      ratedAxialExtensionMm: row.ratedAxialExtensionMm,
-      lateralOffsetMm: row.lateralOffsetMm,
-      maxTempC: row.maxTempC,
-      price: row.price,
+    return (await this.list(false)).map(({ code, name, currency: _c, active: _a, isDemo: _d, ...part }) => ({
+      ...part,
+      name: `${code} ${name}`,
     }));
   }
 

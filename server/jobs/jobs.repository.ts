@@ -2,6 +2,7 @@ import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { JobListQuery } from '../../shared/schemas/jobs';
 import { User } from '../users/user.entity';
 import { Job, JobRun } from './job.entities';
+import { build, Store } from '../db/store';
 
 const likePattern = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 
@@ -52,19 +53,12 @@ export class JobsRepository {
   }
 
   create<T extends object>(entity: new () => T, fields: Partial<T>): T {
-    return Object.assign(new entity(), fields) as T;
+    return build(entity, fields);
   }
 }
 
-/** Hands out repositories: one on the shared connection for reads, one per transaction for writes. */
-export class JobsStore {
-  constructor(private readonly dataSource: DataSource) {}
-
-  read(): JobsRepository {
-    return new JobsRepository(this.dataSource.manager);
-  }
-
-  write<T>(work: (repo: JobsRepository) => Promise<T>): Promise<T> {
-    return this.dataSource.transaction((m) => work(new JobsRepository(m)));
+export class JobsStore extends Store<JobsRepository> {
+  constructor(dataSource: DataSource) {
+    super(dataSource, (m) => new JobsRepository(m));
   }
 }

@@ -1,6 +1,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { In } from 'typeorm';
 import { Quote, QuoteEvent } from './quote.entities';
+import { Store } from '../db/store';
 
 export class QuotesRepository {
   constructor(private readonly m: EntityManager) {}
@@ -35,12 +36,8 @@ export class QuotesRepository {
   }
 }
 
-export class QuotesStore {
-  constructor(private readonly dataSource: DataSource) {}
-  read() {
-    return new QuotesRepository(this.dataSource.manager);
-  }
-  write<T>(work: (repo: QuotesRepository) => Promise<T>): Promise<T> {
-    return this.dataSource.transaction((m) => work(new QuotesRepository(m)));
+export class QuotesStore extends Store<QuotesRepository> {
+  constructor(dataSource: DataSource) {
+    super(dataSource, (m) => new QuotesRepository(m));
   }
 }
