@@ -93,21 +93,59 @@ async function request<T>(method: Method, path: string, body?: unknown): Promise
   }
 
   if (response.ok) return payload as T;
+  throw failureFor(response.status, payload);
+}
 
-  const kind = kindFor(response.status);
+function failureFor(status: number, payload: unknown): ApiError {
+  // A refused upload (too large, not a PDF) is something the person can correct.
+  const kind = status === 413 || status === 415 ? 'invalid' : kindFor(status);
   if (isErrorBody(payload)) {
     const { code, message, fields } = payload.error;
-    throw new ApiError(kind, message || fallbackMessages[kind], response.status, code, fields ?? {});
+    return new ApiError(kind, message || fallbackMessages[kind], status, code, fields ?? {});
   }
-  throw new ApiError(kind, fallbackMessages[kind], response.status);
+  return new ApiError(kind, fallbackMessages[kind], status);
 }
 
 export const api = {
   get: <T>(path: string) => request<T>('GET', path),
   post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
   patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, body),
+  put: <T>(path: string, body: unknown) => request<T>('PUT', path, body),
   delete: <T>(path: string) => request<T>('DELETE', path),
 };
+
+export interface SendOptions {
+  /** Sent as Content-Type; leave unset for FormData so the browser adds the multipart boundary. */
+  contentType?: string;
+  /** Fraction of the body sent so far, 0 to 1. */
+  onProgress?: (fraction: number) => void;
+}
+
+/** POST a file or raw text through XMLHttpRequest, which (unlike fetch) reports upload progress. */
+export function send<T>(path: string, body: FormData | string, { contentType, onProgress }: SendOptions = {}): Promise<T> {
+  return new Promise<T>((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open('POST', `/api${path}`);
+    xhr.withCredentials = true;
+    xhr.setRequestHeader('Accept', 'application/json');
+    if (contentType) xhr.setRequestHeader('Content-Type', contentType);
+    xhr.upload.onprogress = (event) => {
+      if (event.lengthComputable && onProgress) onProgress(event.loaded / event.total);
+    };
+    xhr.onerror = () => reject(new ApiError('offline', fallbackMessages.offline));
+    xhr.onload = () => {
+      let payload: unknown = undefined;
+      try {
+        payload = xhr.responseText ? JSON.parse(xhr.responseText) : undefined;
+      } catch {
+        payload = undefined;
+      }
+      if (xhr.status >= 200 && xhr.status < 300) resolve(payload as T);
+      else reject(failureFor(xhr.status, payload));
+    };
+    xhr.send(body);
+  });
+}
 
 /** Only failures that might pass on their own are worth repeating. */
 export function shouldRetry(failureCount: number, error: unknown): boolean {

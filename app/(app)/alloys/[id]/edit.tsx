@@ -1,0 +1,72 @@
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { AlloyForm } from '../../../../components/alloys/alloy-form';
+import { toFormValues } from '../../../../components/alloys/alloy-form-values';
+import { CATALOGUE_UNITS } from '../../../../components/alloys/format';
+import { EDITORS, RoleGate } from '../../../../components/alloys/role-gate';
+import { TextLink } from '../../../../components/alloys/text-link';
+import { ErrorBanner } from '../../../../components/ui/error-banner';
+import { LoadingState } from '../../../../components/ui/loading-state';
+import { Screen } from '../../../../components/ui/screen';
+import { Text } from '../../../../components/ui/text';
+import { messageOf } from '../../../../hooks/api-client';
+import { useAlloyQuery, useUpdateAlloyMutation } from '../../../../hooks/use-alloys';
+import { useCreateSourceMutation, useSourcesQuery } from '../../../../hooks/use-sources';
+
+export default function EditAlloyScreen() {
+  return (
+    <RoleGate roles={EDITORS} title="Only engineers and admins edit alloys">
+      <EditAlloy />
+    </RoleGate>
+  );
+}
+
+function EditAlloy() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const router = useRouter();
+  const alloy = useAlloyQuery(id);
+  const sources = useSourcesQuery();
+  const createSource = useCreateSourceMutation();
+  const update = useUpdateAlloyMutation(id ?? '');
+
+  if (alloy.isPending || sources.isPending) return <LoadingState label="Loading the alloy…" />;
+  if (alloy.isError || sources.isError) {
+    const error = alloy.error ?? sources.error;
+    return (
+      <Screen>
+        <ErrorBanner
+          title="The alloy could not be opened for editing"
+          message={messageOf(error)}
+          onRetry={() => void (alloy.isError ? alloy.refetch() : sources.refetch())}
+        />
+      </Screen>
+    );
+  }
+
+  // Edits go on the open draft; without one, the published version is the starting point.
+  const base = alloy.data.draft ?? alloy.data.published!;
+  return (
+    <Screen>
+      <TextLink href={`/alloys/${alloy.data.id}`} label={`← ${base.designation}`} accessibilityLabel={`Back to ${base.designation}`} />
+      <Text variant="title" headingLevel={1}>
+        Edit {base.designation}
+      </Text>
+      <Text tone="muted">
+        {alloy.data.draft
+          ? `You are editing draft version ${alloy.data.draft.version}.`
+          : 'Saving opens a draft beside the published version; readers keep the published data until an admin publishes.'}
+      </Text>
+      <AlloyForm
+        key={base.versionId}
+        defaultValues={toFormValues(base)}
+        sources={sources.data}
+        onCreateSource={(input) => createSource.mutateAsync(input)}
+        submitLabel="Save draft"
+        units={CATALOGUE_UNITS}
+        onSubmit={async (values, note) => {
+          await update.mutateAsync({ ...values, note: note || undefined });
+          router.replace(`/alloys/${alloy.data.id}`);
+        }}
+      />
+    </Screen>
+  );
+}

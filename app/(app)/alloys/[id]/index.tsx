@@ -1,0 +1,159 @@
+import { useLocalSearchParams } from 'expo-router';
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { AlloyCharts } from '../../../../components/alloys/alloy-charts';
+import { AlloyHeader } from '../../../../components/alloys/alloy-header';
+import { AlloyProperties } from '../../../../components/alloys/alloy-properties';
+import { CautionsNote } from '../../../../components/alloys/cautions-note';
+import { DatasheetSection } from '../../../../components/alloys/datasheet-section';
+import { DiffList } from '../../../../components/alloys/diff-list';
+import { sourceMap } from '../../../../components/alloys/diff-text';
+import { CATALOGUE_UNITS } from '../../../../components/alloys/format';
+import { RevisionHistory } from '../../../../components/alloys/revision-history';
+import { Section } from '../../../../components/alloys/section';
+import { indexSources, SourceList } from '../../../../components/alloys/source-citation';
+import { StatusActions } from '../../../../components/alloys/status-actions';
+import { TextLink } from '../../../../components/alloys/text-link';
+import { Card } from '../../../../components/ui/card';
+import { ErrorBanner } from '../../../../components/ui/error-banner';
+import { LoadingState } from '../../../../components/ui/loading-state';
+import { Screen } from '../../../../components/ui/screen';
+import { SegmentedControl } from '../../../../components/ui/segmented-control';
+import { Text } from '../../../../components/ui/text';
+import { spacing } from '../../../../constants/theme';
+import { messageOf } from '../../../../hooks/api-client';
+import { useAlloyQuery, useAlloyReviewQuery, useAlloyRevisionsQuery, useAlloyStatusMutation } from '../../../../hooks/use-alloys';
+import { useSessionQuery } from '../../../../hooks/use-session';
+import { useSourcesQuery } from '../../../../hooks/use-sources';
+import { useUploadDatasheetMutation } from '../../../../hooks/use-upload';
+
+type Shown = 'published' | 'draft';
+
+export default function AlloyDetailScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const { data: me } = useSessionQuery();
+  const canEdit = me?.role === 'engineer' || me?.role === 'admin';
+  const isAdmin = me?.role === 'admin';
+  const units = CATALOGUE_UNITS;
+  const alloy = useAlloyQuery(id);
+  const revisions = useAlloyRevisionsQuery(id);
+  const review = useAlloyReviewQuery(id, canEdit && Boolean(alloy.data?.draft));
+  const upload = useUploadDatasheetMutation(id ?? '');
+  const status = useAlloyStatusMutation(id ?? '');
+  const allSources = useSourcesQuery();
+  const [choice, setChoice] = useState<Shown>('published');
+
+  if (alloy.isPending) return <LoadingState label="Loading the alloy…" />;
+  if (alloy.isError) {
+    return (
+      <Screen>
+        <ErrorBanner title="The alloy did not load" message={messageOf(alloy.error)} onRetry={() => void alloy.refetch()} />
+        <TextLink href="/alloys" label="Back to the catalogue" />
+      </Screen>
+    );
+  }
+
+  const detail = alloy.data;
+  const showing: Shown = detail.published && (choice === 'published' || !detail.draft) ? 'published' : 'draft';
+  const version = (showing === 'published' ? detail.published : detail.draft)!;
+  const index = indexSources(
+    [version.densitySourceId, version.limitsSourceId, ...[...version.cte, ...version.modulus, ...version.yield].map((p) => p.sourceId)],
+    detail.sources,
+  );
+  // The history may name sources that no version on this page cites any more.
+  const sources = sourceMap([...(allSources.data ?? []), ...detail.sources]);
+
+  return (
+    <Screen wide>
+      <TextLink href="/alloys" label="← Catalogue" accessibilityLabel="Back to the catalogue" />
+      <AlloyHeader alloy={detail} shown={version} />
+
+      {canEdit && detail.draft ? (
+        <Card edge="accent">
+          <Text variant="heading" headingLevel={2}>
+            Draft version {detail.draft.version}
+          </Text>
+          <Text tone="muted">
+            {detail.published
+              ? 'Not published yet: everyone else still works from the published data.'
+              : 'This alloy has never been published; only engineers and admins can see it.'}
+          </Text>
+          {detail.published ? (
+            review.data ? (
+              <DiffList diff={review.data.diff} sources={sources} units={units} label="Draft changes" />
+            ) : review.isError ? (
+              <ErrorBanner message={messageOf(review.error)} />
+            ) : null
+          ) : null}
+          <View style={styles.links}>
+            <TextLink href={`/alloys/${detail.id}/edit`} label="Edit draft" />
+            {isAdmin ? <TextLink href={`/alloys/${detail.id}/review`} label="Review and publish" /> : null}
+          </View>
+        </Card>
+      ) : canEdit ? (
+        <TextLink href={`/alloys/${detail.id}/edit`} label="Edit this alloy" />
+      ) : null}
+
+      {canEdit && detail.published && detail.draft ? (
+        <SegmentedControl
+          label="Showing"
+          options={[
+            { value: 'published', label: `Published version ${detail.published.version}` },
+            { value: 'draft', label: `Draft version ${detail.draft.version}` },
+          ]}
+          value={showing}
+          onChange={setChoice}
+        />
+      ) : null}
+
+      <Section title="Properties">
+        <AlloyProperties version={version} index={index} units={units} />
+      </Section>
+
+      <Section title="Expansion">
+        <AlloyCharts version={version} units={units} />
+        <CautionsNote />
+      </Section>
+
+      <Section title="Sources" intro="Where each value above comes from. Check the supplier’s certified data before relying on it.">
+        <SourceList index={index} />
+      </Section>
+
+      <Section title="Data sheets">
+        <DatasheetSection
+          datasheets={detail.datasheets}
+          upload={
+            canEdit
+              ? { onUpload: (file) => upload.mutateAsync(file), progress: upload.progress, uploading: upload.isPending }
+              : undefined
+          }
+        />
+      </Section>
+
+      {isAdmin ? (
+        <Section title="Publishing" intro="Publishing makes the draft the data everyone works from; retiring takes the alloy off the list.">
+          <StatusActions
+            status={detail.status}
+            hasDraft={Boolean(detail.draft)}
+            hasPublished={Boolean(detail.published)}
+            onAction={(action, note) => status.mutateAsync({ action, note })}
+          />
+        </Section>
+      ) : null}
+
+      <Section title="Revision history">
+        {revisions.isPending ? (
+          <LoadingState label="Loading the history…" />
+        ) : revisions.isError ? (
+          <ErrorBanner message={messageOf(revisions.error)} onRetry={() => void revisions.refetch()} />
+        ) : (
+          <RevisionHistory revisions={revisions.data} sources={sources} units={units} />
+        )}
+      </Section>
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  links: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.xl },
+});

@@ -1,0 +1,84 @@
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { DiffList } from '../../../../components/alloys/diff-list';
+import { sourceMap } from '../../../../components/alloys/diff-text';
+import { CATALOGUE_UNITS } from '../../../../components/alloys/format';
+import { RoleGate } from '../../../../components/alloys/role-gate';
+import { StatusActions } from '../../../../components/alloys/status-actions';
+import { TextLink } from '../../../../components/alloys/text-link';
+import { Card } from '../../../../components/ui/card';
+import { EmptyState } from '../../../../components/ui/empty-state';
+import { ErrorBanner } from '../../../../components/ui/error-banner';
+import { LoadingState } from '../../../../components/ui/loading-state';
+import { Screen } from '../../../../components/ui/screen';
+import { Text } from '../../../../components/ui/text';
+import { isApiError, messageOf } from '../../../../hooks/api-client';
+import { useAlloyReviewQuery, useAlloyStatusMutation } from '../../../../hooks/use-alloys';
+import { useSourcesQuery } from '../../../../hooks/use-sources';
+
+export default function ReviewAlloyScreen() {
+  return (
+    <RoleGate roles={['admin']} title="Only an admin publishes catalogue changes">
+      <ReviewAlloy />
+    </RoleGate>
+  );
+}
+
+function ReviewAlloy() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const router = useRouter();
+  const review = useAlloyReviewQuery(id);
+  const sources = useSourcesQuery();
+  const status = useAlloyStatusMutation(id ?? '');
+  const back = <TextLink href={`/alloys/${id}`} label="← Back to the alloy" accessibilityLabel="Back to the alloy" />;
+
+  if (review.isPending) return <LoadingState label="Loading the draft…" />;
+  if (review.isError) {
+    return (
+      <Screen>
+        {back}
+        {isApiError(review.error) && review.error.code === 'no_draft' ? (
+          <EmptyState title="Nothing to review" message="This alloy has no open draft: everything is published." />
+        ) : (
+          <ErrorBanner title="The draft did not load" message={messageOf(review.error)} onRetry={() => void review.refetch()} />
+        )}
+      </Screen>
+    );
+  }
+
+  const { draft, published, diff } = review.data;
+  return (
+    <Screen>
+      {back}
+      <Text variant="title" headingLevel={1}>
+        Review {draft.designation}
+      </Text>
+      <Text tone="muted">
+        {published
+          ? `Draft version ${draft.version} against published version ${published.version}.`
+          : `Draft version ${draft.version} of a new alloy: everything below is new.`}
+      </Text>
+      <Card>
+        <Text variant="heading" headingLevel={2}>
+          {diff.length === 1 ? '1 change' : `${diff.length} changes`}
+        </Text>
+        <DiffList diff={diff} sources={sourceMap(sources.data)} units={CATALOGUE_UNITS} label="Changes to publish" />
+      </Card>
+      <Card>
+        <Text variant="heading" headingLevel={2}>
+          Publish
+        </Text>
+        <Text tone="muted">Once published, quotes and jobs use version {draft.version}; the old version stays readable.</Text>
+        <StatusActions
+          status="draft"
+          hasDraft
+          hasPublished={Boolean(published)}
+          only={['publish']}
+          onAction={async (action, note) => {
+            await status.mutateAsync({ action, note });
+            router.replace(`/alloys/${id}`);
+          }}
+        />
+      </Card>
+    </Screen>
+  );
+}

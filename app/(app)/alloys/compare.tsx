@@ -1,0 +1,63 @@
+import { useLocalSearchParams } from 'expo-router';
+import { useState } from 'react';
+import { CautionsNote } from '../../../components/alloys/cautions-note';
+import { MAX_COMPARE } from '../../../components/alloys/compare-bar';
+import { CompareView } from '../../../components/alloys/compare-view';
+import { CATALOGUE_UNITS } from '../../../components/alloys/format';
+import { NumberField } from '../../../components/alloys/number-field';
+import { TextLink } from '../../../components/alloys/text-link';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { ErrorBanner } from '../../../components/ui/error-banner';
+import { LoadingState } from '../../../components/ui/loading-state';
+import { Screen } from '../../../components/ui/screen';
+import { Text } from '../../../components/ui/text';
+import { messageOf } from '../../../hooks/api-client';
+import { useAlloyQueries } from '../../../hooks/use-alloys';
+import { fromDisplay, toDisplay, unitLabel } from '../../../shared/units';
+
+const DEFAULT_AT_C = 800;
+
+export default function CompareScreen() {
+  const { ids: raw } = useLocalSearchParams<{ ids?: string }>();
+  const ids = [...new Set((raw ?? '').split(',').filter(Boolean))].slice(0, MAX_COMPARE);
+  const units = CATALOGUE_UNITS;
+  const queries = useAlloyQueries(ids);
+  const [at, setAt] = useState(toDisplay('temperature', DEFAULT_AT_C, units));
+  const atC = Number.isFinite(at) ? fromDisplay('temperature', at, units) : DEFAULT_AT_C;
+
+  const failed = queries.find((q) => q.isError);
+  const loading = queries.some((q) => q.isPending);
+  const versions = queries.flatMap((q) => {
+    const a = q.data;
+    const v = a?.published ?? a?.draft;
+    return v ? [v] : [];
+  });
+
+  return (
+    <Screen wide>
+      <TextLink href="/alloys" label="← Catalogue" accessibilityLabel="Back to the catalogue" />
+      <Text variant="title" headingLevel={1}>
+        Compare alloys
+      </Text>
+      {ids.length < 2 ? (
+        <EmptyState title="Pick at least two alloys" message="Tick 2 to 4 alloys in the catalogue, then choose Compare." action={<TextLink href="/alloys" label="Open the catalogue" />} />
+      ) : loading ? (
+        <LoadingState label="Loading the alloys…" />
+      ) : failed ? (
+        <ErrorBanner title="An alloy did not load" message={messageOf(failed.error)} onRetry={() => queries.forEach((q) => void q.refetch())} />
+      ) : (
+        <>
+          <NumberField
+            label={`Compare growth at (${unitLabel('temperature', units)})`}
+            value={at}
+            onChange={setAt}
+            error={Number.isFinite(at) ? undefined : 'Enter a temperature'}
+            hint="Each tube heated from 20 °C, per metre."
+          />
+          <CompareView alloys={versions} atC={atC} units={units} />
+          <CautionsNote />
+        </>
+      )}
+    </Screen>
+  );
+}

@@ -1,0 +1,114 @@
+import { useRouter } from 'expo-router';
+import { useState } from 'react';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { AlloyCard } from '../../../components/alloys/alloy-card';
+import { AlloyFilters, DEFAULT_FILTERS, toListParams } from '../../../components/alloys/alloy-filters';
+import { AlloyTable } from '../../../components/alloys/alloy-table';
+import { CompareBar, MAX_COMPARE } from '../../../components/alloys/compare-bar';
+import { CsvTools } from '../../../components/alloys/csv-tools';
+import { CATALOGUE_UNITS } from '../../../components/alloys/format';
+import { Button } from '../../../components/ui/button';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { ErrorBanner } from '../../../components/ui/error-banner';
+import { LoadingState } from '../../../components/ui/loading-state';
+import { Screen } from '../../../components/ui/screen';
+import { Text } from '../../../components/ui/text';
+import { layout, spacing } from '../../../constants/theme';
+import { messageOf } from '../../../hooks/api-client';
+import { CATALOGUE_CSV_URL, useAlloysQuery, useImportCsvMutation } from '../../../hooks/use-alloys';
+import { useSessionQuery } from '../../../hooks/use-session';
+
+export default function AlloyListScreen() {
+  const router = useRouter();
+  const { data: me } = useSessionQuery();
+  const canEdit = me?.role === 'engineer' || me?.role === 'admin';
+  const units = CATALOGUE_UNITS;
+  const [filters, setFilters] = useState(DEFAULT_FILTERS);
+  const [selected, setSelected] = useState<string[]>([]);
+  const { params, atC, atError, minServiceError } = toListParams(filters, units);
+  const alloys = useAlloysQuery(params);
+  const importCsv = useImportCsvMutation();
+  const wide = useWindowDimensions().width >= layout.wideBreakpoint;
+
+  const toggle = (id: string, on: boolean) =>
+    setSelected((ids) => (on ? (ids.includes(id) || ids.length >= MAX_COMPARE ? ids : [...ids, id]) : ids.filter((x) => x !== id)));
+  const full = selected.length >= MAX_COMPARE;
+
+  return (
+    <Screen wide>
+      <View style={styles.header}>
+        <View style={styles.titleRow}>
+          <Text variant="title" headingLevel={1}>
+            Alloy catalogue
+          </Text>
+          {canEdit ? <Button label="New alloy" compact onPress={() => router.push('/alloys/new')} /> : null}
+        </View>
+        <Text tone="muted">
+          The shop’s tube alloys with the source behind every value. Growth is per metre of tube heated from 20 °C.
+        </Text>
+      </View>
+
+      <AlloyFilters
+        values={filters}
+        onChange={setFilters}
+        units={units}
+        canSeeUnpublished={canEdit}
+        atError={atError}
+        minServiceError={minServiceError}
+      />
+      <CompareBar selectedIds={selected} onClear={() => setSelected([])} />
+
+      {alloys.isPending ? (
+        <LoadingState label="Loading alloys…" />
+      ) : alloys.isError ? (
+        <ErrorBanner title="The catalogue did not load" message={messageOf(alloys.error)} onRetry={() => void alloys.refetch()} />
+      ) : alloys.data.items.length === 0 ? (
+        <EmptyState
+          title="No alloys match"
+          message="Clear the search or lower the minimum service temperature to see more."
+          action={<Button label="Clear filters" variant="secondary" compact onPress={() => setFilters(DEFAULT_FILTERS)} />}
+        />
+      ) : (
+        <View style={styles.section}>
+          <Text tone="muted" aria-live="polite">
+            {alloys.data.total} {alloys.data.total === 1 ? 'alloy' : 'alloys'}
+          </Text>
+          {wide ? (
+            <AlloyTable
+              alloys={alloys.data.items}
+              atC={atC}
+              units={units}
+              selectedIds={selected}
+              onToggleCompare={toggle}
+              compareFull={full}
+            />
+          ) : (
+            <View role="list" aria-label="Alloys" style={styles.cards}>
+              {alloys.data.items.map((alloy) => (
+                <View key={alloy.id} role="listitem">
+                  <AlloyCard
+                    alloy={alloy}
+                    atC={atC}
+                    units={units}
+                    selected={selected.includes(alloy.id)}
+                    compareDisabled={full}
+                    onToggleCompare={(on) => toggle(alloy.id, on)}
+                  />
+                </View>
+              ))}
+            </View>
+          )}
+        </View>
+      )}
+
+      {canEdit ? <CsvTools exportHref={CATALOGUE_CSV_URL} onImport={(text) => importCsv.mutateAsync(text)} /> : null}
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  header: { gap: spacing.xs },
+  titleRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: spacing.md },
+  section: { gap: spacing.sm },
+  cards: { gap: spacing.md },
+});

@@ -1,0 +1,57 @@
+import { useRouter } from 'expo-router';
+import { useState } from 'react';
+import { AlloyForm } from '../../../components/alloys/alloy-form';
+import { emptyAlloy } from '../../../components/alloys/alloy-form-values';
+import { CATALOGUE_UNITS } from '../../../components/alloys/format';
+import { EDITORS, RoleGate } from '../../../components/alloys/role-gate';
+import { TextLink } from '../../../components/alloys/text-link';
+import { ErrorBanner } from '../../../components/ui/error-banner';
+import { LoadingState } from '../../../components/ui/loading-state';
+import { Screen } from '../../../components/ui/screen';
+import { Text } from '../../../components/ui/text';
+import { messageOf } from '../../../hooks/api-client';
+import { useCreateAlloyMutation } from '../../../hooks/use-alloys';
+import { useCreateSourceMutation, useSourcesQuery } from '../../../hooks/use-sources';
+
+export default function NewAlloyScreen() {
+  return (
+    <RoleGate roles={EDITORS} title="Only engineers and admins add alloys">
+      <NewAlloy />
+    </RoleGate>
+  );
+}
+
+function NewAlloy() {
+  const router = useRouter();
+  const sources = useSourcesQuery();
+  const createSource = useCreateSourceMutation();
+  const create = useCreateAlloyMutation();
+  const [defaults] = useState(emptyAlloy);
+
+  return (
+    <Screen>
+      <TextLink href="/alloys" label="← Catalogue" accessibilityLabel="Back to the catalogue" />
+      <Text variant="title" headingLevel={1}>
+        New alloy
+      </Text>
+      <Text tone="muted">It is saved as a draft; an admin publishes it before the shop works from it.</Text>
+      {sources.isPending ? (
+        <LoadingState label="Loading sources…" />
+      ) : sources.isError ? (
+        <ErrorBanner title="The sources did not load" message={messageOf(sources.error)} onRetry={() => void sources.refetch()} />
+      ) : (
+        <AlloyForm
+          defaultValues={defaults}
+          sources={sources.data}
+          onCreateSource={(input) => createSource.mutateAsync(input)}
+          submitLabel="Save draft"
+          units={CATALOGUE_UNITS}
+          onSubmit={async (values, note) => {
+            const alloy = await create.mutateAsync({ ...values, note });
+            router.replace(`/alloys/${alloy.id}`);
+          }}
+        />
+      )}
+    </Screen>
+  );
+}

@@ -1,0 +1,124 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { Controller, type FieldPath, useForm } from 'react-hook-form';
+import type { z } from 'zod';
+import { StyleSheet, View } from 'react-native';
+import { spacing } from '../../constants/theme';
+import { messageOf } from '../../hooks/api-client';
+import { flexPartInputSchema, type FlexPartInput } from '../../shared/schemas/alloy';
+import { NumberField } from '../alloys/number-field';
+import { placeServerErrors } from '../alloys/server-errors';
+import { Button } from '../ui/button';
+import { ErrorBanner } from '../ui/error-banner';
+import { TextField } from '../ui/text-field';
+
+/** What the form holds: the schema's input, where `active` may be left out. */
+type Draft = z.input<typeof flexPartInputSchema>;
+
+const NUMBERS: { name: FieldPath<Draft>; label: string }[] = [
+  { name: 'boreMm', label: 'Bore (mm)' },
+  { name: 'liveLengthMm', label: 'Live length (mm)' },
+  { name: 'ratedAxialCompressionMm', label: 'Rated compression (mm)' },
+  { name: 'ratedAxialExtensionMm', label: 'Rated extension (mm)' },
+  { name: 'lateralOffsetMm', label: 'Lateral offset (mm)' },
+  { name: 'maxTempC', label: 'Maximum temperature (°C)' },
+  { name: 'price', label: 'Price' },
+];
+
+export const EMPTY_FLEX_PART: Draft = {
+  code: '',
+  name: '',
+  boreMm: Number.NaN,
+  liveLengthMm: Number.NaN,
+  ratedAxialCompressionMm: Number.NaN,
+  ratedAxialExtensionMm: Number.NaN,
+  lateralOffsetMm: Number.NaN,
+  maxTempC: Number.NaN,
+  price: Number.NaN,
+  currency: 'EUR',
+  active: true,
+};
+
+export interface FlexPartFormProps {
+  defaultValues: Draft;
+  submitLabel: string;
+  onSubmit: (values: FlexPartInput) => Promise<unknown>;
+  onCancel?: () => void;
+  /** Names the form's fields apart when several forms are open. */
+  context?: string;
+}
+
+export function FlexPartForm({ defaultValues, submitLabel, onSubmit, onCancel, context }: FlexPartFormProps) {
+  const [failure, setFailure] = useState<string>();
+  const { control, handleSubmit, setError, reset, formState: { errors, isSubmitting } } = useForm<Draft, unknown, FlexPartInput>({
+    resolver: zodResolver(flexPartInputSchema),
+    defaultValues,
+  });
+  const suffix = context ? `, ${context}` : '';
+
+  const submit = handleSubmit(async (values) => {
+    setFailure(undefined);
+    try {
+      await onSubmit(values);
+      if (!onCancel) reset(EMPTY_FLEX_PART);
+    } catch (error) {
+      placeServerErrors(error, setError);
+      setFailure(messageOf(error));
+    }
+  });
+
+  return (
+    <View style={styles.form}>
+      {failure ? <ErrorBanner title="Not saved: your entries are still here" message={failure} /> : null}
+      {(['code', 'name', 'currency'] as const).map((name) => (
+        <Controller
+          key={name}
+          control={control}
+          name={name}
+          render={({ field }) => (
+            <TextField
+              ref={field.ref}
+              label={`${{ code: 'Part code', name: 'Name', currency: 'Currency' }[name]}${suffix}`}
+              value={field.value}
+              onChangeText={field.onChange}
+              onBlur={field.onBlur}
+              error={errors[name]?.message}
+              autoCapitalize={name === 'name' ? 'sentences' : 'characters'}
+            />
+          )}
+        />
+      ))}
+      <View style={styles.grid}>
+        {NUMBERS.map(({ name, label }) => (
+          <View key={name} style={styles.cell}>
+            <Controller
+              control={control}
+              name={name}
+              render={({ field }) => (
+                <NumberField
+                  ref={field.ref}
+                  label={`${label}${suffix}`}
+                  value={field.value as number}
+                  onChange={field.onChange}
+                  onBlur={field.onBlur}
+                  error={(errors as Record<string, { message?: string } | undefined>)[name]?.message}
+                />
+              )}
+            />
+          </View>
+        ))}
+      </View>
+      <View style={styles.actions}>
+        <Button label={submitLabel} compact loading={isSubmitting} onPress={() => void submit()} />
+        {onCancel ? <Button label="Cancel" variant="ghost" compact onPress={onCancel} /> : null}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: spacing.md },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.md },
+  cell: { flexGrow: 1, flexBasis: 180 },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
+});

@@ -1,0 +1,141 @@
+import { keepPreviousData, useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { DiffEntry } from '../shared/catalogue/alloy-diff';
+import type {
+  AlloyDetail,
+  AlloyFamily,
+  AlloyInput,
+  AlloyPatch,
+  AlloySummary,
+  AlloyVersionView,
+  RevisionView,
+} from '../shared/schemas/alloy';
+import { api, send } from './api-client';
+
+export interface AlloyListParams {
+  search?: string;
+  family?: AlloyFamily;
+  minServiceC?: number;
+  sort?: 'designation' | 'limit' | 'expansion' | 'price';
+  atC?: number;
+  includeDrafts?: boolean;
+  includeRetired?: boolean;
+}
+
+export interface AlloyReview {
+  alloyId: string;
+  published: AlloyVersionView | null;
+  draft: AlloyVersionView;
+  diff: DiffEntry[];
+}
+
+export interface ImportReport {
+  created: string[];
+  updated: string[];
+  unchanged: string[];
+  refused: { line: number; uns: string; message: string }[];
+}
+
+export const alloyKeys = {
+  all: ['alloys'] as const,
+  lists: () => [...alloyKeys.all, 'list'] as const,
+  list: (params: AlloyListParams) => [...alloyKeys.lists(), params] as const,
+  detail: (id: string) => [...alloyKeys.all, 'detail', id] as const,
+  revisions: (id: string) => [...alloyKeys.all, 'revisions', id] as const,
+  review: (id: string) => [...alloyKeys.all, 'review', id] as const,
+};
+
+/** Where the browser downloads the catalogue as CSV (a plain link: the server sends an attachment). */
+export const CATALOGUE_CSV_URL = '/api/alloys/export.csv';
+
+function listQueryString(params: AlloyListParams): string {
+  const query = new URLSearchParams({ pageSize: '200' });
+  for (const [key, value] of Object.entries(params)) {
+    if (value === undefined || value === '' || (typeof value === 'number' && !Number.isFinite(value))) continue;
+    query.set(key, String(value));
+  }
+  return query.toString();
+}
+
+export function useAlloysQuery(params: AlloyListParams) {
+  return useQuery({
+    queryKey: alloyKeys.list(params),
+    queryFn: () => api.get<{ items: AlloySummary[]; total: number }>(`/alloys?${listQueryString(params)}`),
+    // Typing in the search or temperature box keeps the last answer on screen until the next arrives.
+    placeholderData: keepPreviousData,
+  });
+}
+
+const fetchAlloy = async (id: string) => (await api.get<{ alloy: AlloyDetail }>(`/alloys/${encodeURIComponent(id)}`)).alloy;
+
+export function useAlloyQuery(id: string | undefined) {
+  return useQuery({
+    queryKey: alloyKeys.detail(id ?? ''),
+    queryFn: () => fetchAlloy(id!),
+    enabled: Boolean(id),
+  });
+}
+
+/** Several alloys at once, for the comparison. */
+export function useAlloyQueries(ids: string[]) {
+  return useQueries({
+    queries: ids.map((id) => ({ queryKey: alloyKeys.detail(id), queryFn: () => fetchAlloy(id) })),
+  });
+}
+
+export function useAlloyRevisionsQuery(id: string | undefined) {
+  return useQuery({
+    queryKey: alloyKeys.revisions(id ?? ''),
+    queryFn: async () => (await api.get<{ items: RevisionView[] }>(`/alloys/${encodeURIComponent(id!)}/revisions`)).items,
+    enabled: Boolean(id),
+  });
+}
+
+export function useAlloyReviewQuery(id: string | undefined, enabled = true) {
+  return useQuery({
+    queryKey: alloyKeys.review(id ?? ''),
+    queryFn: () => api.get<AlloyReview>(`/alloys/${encodeURIComponent(id!)}/review`),
+    enabled: Boolean(id) && enabled,
+  });
+}
+
+function useInvalidateAlloys() {
+  const queryClient = useQueryClient();
+  return () => queryClient.invalidateQueries({ queryKey: alloyKeys.all });
+}
+
+export function useCreateAlloyMutation() {
+  const invalidate = useInvalidateAlloys();
+  return useMutation({
+    mutationFn: async (input: AlloyInput & { note?: string }) => (await api.post<{ alloy: AlloyDetail }>('/alloys', input)).alloy,
+    onSuccess: invalidate,
+  });
+}
+
+export function useUpdateAlloyMutation(id: string) {
+  const invalidate = useInvalidateAlloys();
+  return useMutation({
+    mutationFn: async (patch: AlloyPatch) =>
+      (await api.patch<{ alloy: AlloyDetail }>(`/alloys/${encodeURIComponent(id)}`, patch)).alloy,
+    onSuccess: invalidate,
+  });
+}
+
+export type AlloyStatusAction = 'publish' | 'retire' | 'restore';
+
+/** Publish the draft, retire or restore: admin only, each with a note for the history. */
+export function useAlloyStatusMutation(id: string) {
+  const invalidate = useInvalidateAlloys();
+  return useMutation({
+    mutationFn: async ({ action, note }: { action: AlloyStatusAction; note: string }) =>
+      (await api.post<{ alloy: AlloyDetail }>(`/alloys/${encodeURIComponent(id)}/${action}`, { note })).alloy,
+    onSuccess: invalidate,
+  });
+}
+
+export function useImportCsvMutation() {
+  const invalidate = useInvalidateAlloys();
+  return useMutation({
+    mutationFn: (csvText: string) => send<ImportReport>('/alloys/import', csvText, { contentType: 'text/csv' }),
+    onSuccess: invalidate,
+  });
+}
