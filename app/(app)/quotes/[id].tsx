@@ -1,0 +1,83 @@
+import { useLocalSearchParams } from 'expo-router';
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { EmailPreviewSection } from '../../../components/quotes/email-preview-section';
+import { HistoryCard, QuoteDetail } from '../../../components/quotes/quote-detail';
+import { QuoteBuilder } from '../../../components/quotes/quote-builder';
+import { QuoteHeader } from '../../../components/quotes/quote-header';
+import { SendPanel } from '../../../components/quotes/send-panel';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { ErrorBanner } from '../../../components/ui/error-banner';
+import { LoadingState } from '../../../components/ui/loading-state';
+import { Screen } from '../../../components/ui/screen';
+import { layout, spacing } from '../../../constants/theme';
+import { isApiError, messageOf } from '../../../hooks/api-client';
+import { useQuoteQuery, useSendQuoteMutation, useUpdateQuoteMutation } from '../../../hooks/use-quotes';
+import { useSessionQuery } from '../../../hooks/use-session';
+import type { QuoteView } from '../../../shared/schemas/quotes';
+
+export default function QuoteScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const { data: me } = useSessionQuery();
+  const quote = useQuoteQuery(id);
+
+  if (quote.isPending || !me) return <LoadingState label="Loading the quote…" />;
+  if (quote.isError) {
+    return (
+      <Screen>
+        {isApiError(quote.error) && quote.error.kind === 'not_found' ? (
+          <EmptyState title="There is no such quote" message="It may have been mistyped; the list has every quote." />
+        ) : (
+          <ErrorBanner title="The quote did not load" message={messageOf(quote.error)} onRetry={() => void quote.refetch()} />
+        )}
+      </Screen>
+    );
+  }
+  const canSell = me.role === 'sales' || me.role === 'admin';
+  return (
+    <Screen wide>
+      <QuoteHeader quote={quote.data} />
+      {quote.data.status === 'draft' && canSell ? <DraftEditor quote={quote.data} /> : <QuoteDetail quote={quote.data} />}
+    </Screen>
+  );
+}
+
+function DraftEditor({ quote }: { quote: QuoteView }) {
+  const update = useUpdateQuoteMutation(quote.id);
+  const send = useSendQuoteMutation(quote.id);
+  const [dirty, setDirty] = useState(false);
+  const [defaults] = useState(() => ({
+    jobId: quote.jobId,
+    customerName: quote.customerName,
+    customerEmail: quote.customerEmail,
+    customerCompany: quote.customerCompany,
+    validUntil: quote.validUntil,
+    message: quote.message,
+    options: quote.options.map((o) => ({ label: o.label, alloyId: o.alloyId, runAlloys: o.runAlloys ?? {} })),
+  }));
+  return (
+    <View style={styles.stack}>
+      <QuoteBuilder defaultValues={defaults} submitLabel="Save changes" onSubmit={(values) => update.mutateAsync(values)} onDirtyChange={setDirty} />
+      <View style={styles.pair}>
+        <View style={styles.pairItem}>
+          <SendPanel
+            number={quote.number}
+            customerEmail={quote.customerEmail}
+            onSend={() => send.mutateAsync()}
+            disabledReason={dirty ? 'Save your changes first: sending sends the saved draft.' : undefined}
+          />
+        </View>
+        <View style={styles.pairItem}>
+          <HistoryCard quote={quote} />
+        </View>
+      </View>
+      <EmailPreviewSection quoteId={quote.id} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  stack: { gap: spacing.xl },
+  pair: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.xl },
+  pairItem: { flexGrow: 1, flexBasis: layout.formMaxWidth - spacing.xxxl },
+});

@@ -1,0 +1,129 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { colors, radii, spacing } from '../../constants/theme';
+import type { PublicDecision } from '../../hooks/use-public-quote';
+import type { PublicQuoteView } from '../../shared/schemas/quotes';
+import { Button } from '../ui/button';
+import { Card } from '../ui/card';
+import { Text } from '../ui/text';
+import { CustomerCautions } from './customer-cautions';
+import { AcceptForm, DeclineForm } from './decision-forms';
+import { PublicOptionCard } from './public-option-card';
+
+export interface PublicQuotePageProps {
+  quote: PublicQuoteView;
+  onDecide: (decision: PublicDecision) => Promise<unknown>;
+}
+
+type Step = { kind: 'choosing' } | { kind: 'accepting'; index: number } | { kind: 'declining' };
+
+/** The customer's view of one quote through its private link; nothing of the shop's app is reachable. */
+export function PublicQuotePage({ quote, onDecide }: PublicQuotePageProps) {
+  const [step, setStep] = useState<Step>({ kind: 'choosing' });
+  const [decidedBy, setDecidedBy] = useState<string>();
+  const open = quote.status === 'sent' || quote.status === 'viewed';
+
+  return (
+    <View style={styles.page}>
+      <View style={styles.header}>
+        <Text variant="overline" tone="muted">
+          {quote.shopName}
+        </Text>
+        <Text variant="title" headingLevel={1}>
+          Quote {quote.number}
+        </Text>
+        <Text variant="bodyStrong">
+          For {quote.customerName}
+          {quote.customerCompany ? `, ${quote.customerCompany}` : ''}: {quote.jobName}
+        </Text>
+        <Text tone="muted">Valid until {quote.validUntil}</Text>
+        {quote.message ? <Text>{quote.message}</Text> : null}
+      </View>
+
+      <Decided quote={quote} decidedBy={decidedBy} />
+
+      <View style={styles.options}>
+        {quote.options.map((option, index) => (
+          <PublicOptionCard key={index} option={option} index={index} currency={quote.currency} accepted={quote.acceptedOptionIndex === index}>
+            {open && step.kind === 'choosing' ? (
+              <Button label={`Accept option ${index + 1}`} onPress={() => setStep({ kind: 'accepting', index })} />
+            ) : null}
+            {decidedBy && quote.acceptedOptionIndex === index ? <Recorded shopName={quote.shopName} /> : null}
+            {open && step.kind === 'accepting' && step.index === index ? (
+              <AcceptForm
+                optionIndex={index}
+                optionLabel={option.label}
+                onCancel={() => setStep({ kind: 'choosing' })}
+                onSubmit={async (values) => {
+                  await onDecide({ accept: true, ...values });
+                  setDecidedBy(values.name);
+                }}
+              />
+            ) : null}
+          </PublicOptionCard>
+        ))}
+      </View>
+
+      {decidedBy && quote.status === 'declined' ? <Recorded shopName={quote.shopName} /> : null}
+      {open ? (
+        <Card>
+          <Text variant="heading" headingLevel={2}>
+            None of these?
+          </Text>
+          {step.kind === 'declining' ? (
+            <DeclineForm
+              onCancel={() => setStep({ kind: 'choosing' })}
+              onSubmit={async (values) => {
+                await onDecide({ accept: false, ...values });
+                setDecidedBy(values.name);
+              }}
+            />
+          ) : (
+            <>
+              <Text tone="muted">You can decline the quote; a reason helps the shop, but is not needed.</Text>
+              <Button label="Decline" variant="ghost" disabled={step.kind !== 'choosing'} onPress={() => setStep({ kind: 'declining' })} />
+            </>
+          )}
+        </Card>
+      ) : null}
+
+      <CustomerCautions />
+      <Text variant="caption" tone="muted">
+        Prices and temperatures are the shop’s guidance for this job from typical alloy data. Local codes, the alloy supplier’s certified data and licensed engineering practice decide the final design.
+      </Text>
+    </View>
+  );
+}
+
+/** Said where the customer pressed, so the answer is seen without scrolling back up. */
+function Recorded({ shopName }: { shopName: string }) {
+  return (
+    <Text variant="bodyStrong" tone="success">
+      Recorded. {shopName} has your answer.
+    </Text>
+  );
+}
+
+function Decided({ quote, decidedBy }: { quote: PublicQuoteView; decidedBy?: string }) {
+  if (quote.status !== 'accepted' && quote.status !== 'declined') return null;
+  const thanks = decidedBy ? `Thank you, ${decidedBy}. ` : '';
+  const text =
+    quote.status === 'accepted' && quote.acceptedOptionIndex !== null
+      ? `${thanks}You accepted option ${quote.acceptedOptionIndex + 1}, ${quote.options[quote.acceptedOptionIndex]?.label}. ${quote.shopName} has been told and will be in touch.`
+      : `${thanks}You declined this quote. ${quote.shopName} has been told.`;
+  return (
+    <View accessible accessibilityRole="alert" aria-live="polite" style={styles.decided}>
+      <Text variant="heading" tone="success">
+        {quote.status === 'accepted' ? 'Quote accepted' : 'Quote declined'}
+      </Text>
+      <Text>{text}</Text>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  page: { gap: spacing.xl },
+  header: { gap: spacing.xs },
+  options: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.lg, alignItems: 'stretch' },
+  decided: { gap: spacing.xs, padding: spacing.lg, borderRadius: radii.lg, borderLeftWidth: 6, borderLeftColor: colors.success, backgroundColor: colors.successSoft },
+});

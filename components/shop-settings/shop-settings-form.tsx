@@ -1,0 +1,118 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import type { z } from 'zod';
+import { type Control, Controller, useForm } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+import { spacing } from '../../constants/theme';
+import { ALLOY_FAMILIES, FAMILY_LABELS } from '../../shared/schemas/alloy';
+import { shopSettingsSchema, type ShopSettings } from '../../shared/schemas/shop-settings';
+import { NumberField } from '../alloys/number-field';
+import { placeServerErrors } from '../quotes/server-errors';
+import { Button } from '../ui/button';
+import { Card } from '../ui/card';
+import { ErrorBanner } from '../ui/error-banner';
+import { Text } from '../ui/text';
+import { TextField } from '../ui/text-field';
+
+type Values = z.input<typeof shopSettingsSchema>;
+type NumberPath = 'labourRatePerHour' | 'hoursPerRun' | 'scrapAllowancePct' | 'marginPct' | `weldTimeFactors.${(typeof ALLOY_FAMILIES)[number]}`;
+
+export interface ShopSettingsFormProps {
+  defaultValues: ShopSettings;
+  /** Saves; a rejection keeps every edit and shows the server's messages under the fields. */
+  onSubmit: (values: ShopSettings) => Promise<unknown>;
+}
+
+function NumberInput({ control, name, label, hint, error }: { control: Control<Values>; name: NumberPath; label: string; hint?: string; error?: string }) {
+  return (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field: { onChange, onBlur, value, ref } }) => (
+        <NumberField ref={ref} label={label} value={value as number} onChange={onChange} onBlur={onBlur} hint={hint} error={error} />
+      )}
+    />
+  );
+}
+
+export function ShopSettingsForm({ defaultValues, onSubmit }: ShopSettingsFormProps) {
+  const [failure, setFailure] = useState<string>();
+  const [saved, setSaved] = useState(false);
+  const {
+    control,
+    handleSubmit,
+    setError,
+    reset,
+    formState: { errors, isSubmitting },
+  } = useForm<Values, unknown, ShopSettings>({ resolver: zodResolver(shopSettingsSchema), defaultValues });
+
+  const submit = handleSubmit(async (values) => {
+    setFailure(undefined);
+    setSaved(false);
+    try {
+      await onSubmit(values);
+      reset({ ...values, isDemo: false });
+      setSaved(true);
+    } catch (error) {
+      setFailure(placeServerErrors(error, setError));
+    }
+  });
+
+  return (
+    <View style={styles.form}>
+      <Card>
+        <Text variant="heading" headingLevel={2}>
+          Shop
+        </Text>
+        <Controller
+          control={control}
+          name="shopName"
+          render={({ field: { onChange, onBlur, value, ref } }) => (
+            <TextField ref={ref} label="Shop name" value={value} onChangeText={onChange} onBlur={onBlur} error={errors.shopName?.message} hint="Signs the quotes and heads the customer’s page" />
+          )}
+        />
+        <Controller
+          control={control}
+          name="currency"
+          render={({ field: { onChange, onBlur, value, ref } }) => (
+            <TextField ref={ref} label="Currency" value={value} onChangeText={onChange} onBlur={onBlur} error={errors.currency?.message} hint="Three letters, e.g. EUR, GBP, USD" autoCapitalize="characters" maxLength={3} />
+          )}
+        />
+      </Card>
+      <Card>
+        <Text variant="heading" headingLevel={2}>
+          Labour
+        </Text>
+        <NumberInput control={control} name="labourRatePerHour" label="Labour rate per hour" error={errors.labourRatePerHour?.message} />
+        <NumberInput control={control} name="hoursPerRun" label="Hours per run" hint="Cutting, fitting and welding one run in austenitic stainless" error={errors.hoursPerRun?.message} />
+        <Text variant="label">Weld-time factor per alloy family</Text>
+        <Text variant="caption" tone="muted">
+          Hours per run are multiplied by the family’s factor; austenitic stainless is 1.
+        </Text>
+        {ALLOY_FAMILIES.map((family) => (
+          <NumberInput key={family} control={control} name={`weldTimeFactors.${family}`} label={`Weld-time factor, ${FAMILY_LABELS[family]}`} error={errors.weldTimeFactors?.[family]?.message} />
+        ))}
+      </Card>
+      <Card>
+        <Text variant="heading" headingLevel={2}>
+          Material and margin
+        </Text>
+        <NumberInput control={control} name="scrapAllowancePct" label="Scrap allowance (%)" hint="Added to the material cost for offcuts and test pieces" error={errors.scrapAllowancePct?.message} />
+        <NumberInput control={control} name="marginPct" label="Margin (%)" hint="On material and labour together" error={errors.marginPct?.message} />
+      </Card>
+      {failure ? <ErrorBanner title="The settings were not saved" message={failure} /> : null}
+      {saved ? (
+        <View accessible accessibilityRole="alert" aria-live="polite">
+          <Text tone="success" variant="bodyStrong">
+            Saved. New drafts are priced with these rules; sent quotes keep theirs.
+          </Text>
+        </View>
+      ) : null}
+      <Button label={isSubmitting ? 'Saving…' : 'Save settings'} accessibilityLabel="Save settings" loading={isSubmitting} onPress={() => void submit()} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: spacing.xl },
+});

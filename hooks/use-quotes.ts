@@ -1,0 +1,73 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { QuoteInput, QuoteSummary, QuoteView } from '../shared/schemas/quotes';
+import { api } from './api-client';
+
+export interface EmailPreview {
+  to: string;
+  subject: string;
+  text: string;
+  html: string;
+}
+
+export const quoteKeys = {
+  all: ['quotes'] as const,
+  list: () => [...quoteKeys.all, 'list'] as const,
+  detail: (id: string) => [...quoteKeys.all, 'detail', id] as const,
+  preview: (id: string) => [...quoteKeys.all, 'preview', id] as const,
+};
+
+const path = (id: string) => `/quotes/${encodeURIComponent(id)}`;
+
+export function useQuotesQuery() {
+  return useQuery({
+    queryKey: quoteKeys.list(),
+    queryFn: async () => (await api.get<{ items: QuoteSummary[] }>('/quotes')).items,
+  });
+}
+
+export function useQuoteQuery(id: string | undefined) {
+  return useQuery({
+    queryKey: quoteKeys.detail(id ?? ''),
+    queryFn: async () => (await api.get<{ quote: QuoteView }>(path(id!))).quote,
+    enabled: Boolean(id),
+  });
+}
+
+export function useEmailPreviewQuery(id: string | undefined, enabled: boolean) {
+  return useQuery({
+    queryKey: quoteKeys.preview(id ?? ''),
+    queryFn: async () => (await api.get<{ email: EmailPreview }>(`${path(id!)}/email-preview`)).email,
+    enabled: Boolean(id) && enabled,
+  });
+}
+
+export function useCreateQuoteMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: QuoteInput) => (await api.post<{ quote: QuoteView }>('/quotes', input)).quote,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: quoteKeys.all }),
+  });
+}
+
+export function useUpdateQuoteMutation(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: QuoteInput) => (await api.patch<{ quote: QuoteView }>(path(id), input)).quote,
+    onSuccess: (quote) => {
+      queryClient.setQueryData(quoteKeys.detail(id), quote);
+      return queryClient.invalidateQueries({ queryKey: quoteKeys.all });
+    },
+  });
+}
+
+export function useSendQuoteMutation(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async () => (await api.post<{ quote: QuoteView }>(`${path(id)}/send`)).quote,
+    onSuccess: (quote) => {
+      queryClient.setQueryData(quoteKeys.detail(id), quote);
+      void queryClient.invalidateQueries({ queryKey: ['outbox'] });
+      return queryClient.invalidateQueries({ queryKey: quoteKeys.all });
+    },
+  });
+}
