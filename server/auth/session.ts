@@ -4,7 +4,6 @@ import { AppError } from '../http/app-error';
 import type { Auth } from './lucia';
 
 declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     interface Request {
       user?: PublicUser;

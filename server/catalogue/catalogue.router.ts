@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import express, { Router } from 'express';
 import { z } from 'zod';
 import { alloyInputSchema, alloyListQuerySchema, alloyPatchSchema, sourceInputSchema } from '../../shared/schemas/alloy';
 import { requireRole, requireSignedIn } from '../auth/session';
@@ -6,7 +6,6 @@ import { AppError } from '../http/app-error';
 import { fieldsFromZod, parseBody } from '../http/validate';
 import type { CatalogueCsvService } from './catalogue-csv.service';
 import type { CatalogueService } from './catalogue.service';
-import express from 'express';
 
 const noteSchema = z.object({ note: z.string().trim().max(500).default('') });
 
