@@ -44,6 +44,9 @@ describe.each([
       await page.getByRole('heading', { name: `${label} home` }).waitFor();
       await screenshot(page, `home-${role}-${size}`);
 
+      // On a phone the screens that do not fit the tab bar sit behind "More".
+      const more = page.getByRole('button', { name: 'More' });
+      if (await more.count()) await more.click();
       const users = page.getByRole('link', { name: 'Users' });
       if (role === 'admin') await users.first().waitFor();
       else expect(await users.count()).toBe(0);

@@ -26,7 +26,9 @@ export const ROLE_STEPS: Record<Role, NextStep[]> = {
     },
     {
       title: 'Publish catalogue changes',
-      body: 'Review what engineers have added or corrected before the shop sizes pipe from it. Coming soon.',
+      body: 'Review what engineers have added or corrected before the shop sizes pipe from it: open an alloy with a draft and review it.',
+      href: '/alloys',
+      linkLabel: 'Open the catalogue',
     },
     {
       title: 'Check the demo data',
@@ -38,11 +40,15 @@ export const ROLE_STEPS: Record<Role, NextStep[]> = {
   engineer: [
     {
       title: 'Add and correct alloys',
-      body: 'Enter expansion coefficients, temperature limits and densities for the stainless and nickel grades you run. Coming soon.',
+      body: 'Enter expansion coefficients, temperature limits and densities for the stainless and nickel grades you run.',
+      href: '/alloys',
+      linkLabel: 'Open the catalogue',
     },
     {
       title: 'Attach data sheets',
-      body: 'Keep the supplier’s certified sheet beside each alloy so anyone can check where a number came from. Coming soon.',
+      body: 'Keep the supplier’s certified sheet beside each alloy so anyone can check where a number came from: open the alloy and upload the PDF.',
+      href: '/alloys',
+      linkLabel: 'Choose an alloy',
     },
     {
       title: 'Hand changes to an admin',
@@ -52,25 +58,41 @@ export const ROLE_STEPS: Record<Role, NextStep[]> = {
   fabricator: [
     {
       title: 'Pick an alloy for a run',
-      body: 'Compare grades by service temperature and growth per metre before you cut. Coming with the catalogue.',
+      body: 'Compare grades by service temperature and growth per metre before you cut.',
+      href: '/alloys',
+      linkLabel: 'Open the catalogue',
     },
     {
       title: 'Size flex sections and slip joints',
-      body: 'Work out how far a downpipe or manifold grows from cold to operating heat and how much travel a joint needs. Coming soon.',
+      body: 'Work out how far a downpipe or manifold grows from cold to operating heat and how much travel a joint needs: open a job and a run.',
+      href: '/jobs',
+      linkLabel: 'Open the jobs',
     },
     {
       title: 'Print a job sheet',
-      body: 'Take the lengths, allowances and material for a job to the bench on paper. Coming soon.',
+      body: 'Take the lengths, allowances and material for a job to the bench on paper: open the job, then its job sheet.',
+      href: '/jobs',
+      linkLabel: 'Choose a job',
     },
   ],
   sales: [
     {
       title: 'Build a quote',
-      body: 'Put a customer’s job together with two or three material options side by side. Coming soon.',
+      body: 'Put a customer’s job together with two to four material options side by side, then e-mail it.',
+      href: '/quotes/new',
+      linkLabel: 'New quote',
+    },
+    {
+      title: 'Follow your quotes',
+      body: 'See which quotes customers have opened, accepted or declined, and read the e-mails in the outbox.',
+      href: '/quotes',
+      linkLabel: 'Open quotes',
     },
     {
       title: 'Explain the material choice',
-      body: 'Show a customer why a nickel alloy costs more and where a 300-series stainless is enough. Coming with the catalogue.',
+      body: 'Show a customer why a nickel alloy costs more and where a 300-series stainless is enough.',
+      href: '/alloys',
+      linkLabel: 'Compare alloys',
     },
   ],
 };

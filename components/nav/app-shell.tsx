@@ -5,7 +5,7 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { colors, layout, radii, spacing, touchTarget, typography } from '../../constants/theme';
 import { ROLE_LABELS, type PublicUser } from '../../shared/schemas/auth';
 import { Text } from '../ui/text';
-import { isActive, navItemsFor, type NavItem } from './nav-items';
+import { isActive, navItemsFor, splitForTabBar, type NavItem } from './nav-items';
 import { pressState } from '../ui/press-state';
 
 export interface AppShellProps {
@@ -81,17 +81,40 @@ function TopBar({ onSignOut, signingOut }: { onSignOut: () => void; signingOut: 
   );
 }
 
+/** A phone has room for four tabs: the rest sit behind "More", in a panel above the bar. */
 function BottomTabs({ items, pathname }: { items: NavItem[]; pathname: string }) {
   const insets = useSafeAreaInsets();
+  // The panel belongs to the screen it was opened on, so moving to another screen closes it.
+  const [openOn, setOpenOn] = useState<string | null>(null);
+  const open = openOn === pathname;
+  const { tabs, more } = splitForTabBar(items);
+  const moreActive = more.some((item) => isActive(item, pathname));
   return (
-    <View
-      role="navigation"
-      aria-label="Main"
-      style={[styles.tabBar, { paddingBottom: insets.bottom }]}
-    >
-      {items.map((item) => (
-        <NavLink key={item.segment} item={item} active={isActive(item, pathname)} orientation="tab" />
-      ))}
+    <View role="navigation" aria-label="Main">
+      {open && more.length > 0 ? (
+        <View style={styles.morePanel} aria-label="More screens">
+          {more.map((item) => (
+            <NavLink key={item.segment} item={item} active={isActive(item, pathname)} orientation="rail" />
+          ))}
+        </View>
+      ) : null}
+      <View style={[styles.tabBar, { paddingBottom: insets.bottom }]}>
+        {tabs.map((item) => (
+          <NavLink key={item.segment} item={item} active={isActive(item, pathname)} orientation="tab" />
+        ))}
+        {more.length > 0 ? (
+          <Pressable
+            accessibilityRole="button"
+            accessibilityLabel="More"
+            aria-expanded={open}
+            onPress={() => setOpenOn(open ? null : pathname)}
+            style={StyleSheet.flatten([styles.tabItem, (open || moreActive) && styles.itemActive])}
+          >
+            <View style={[styles.tabMarker, moreActive && styles.markerActive]} />
+            <Text style={[styles.itemLabel, moreActive && styles.itemLabelActive]}>More</Text>
+          </Pressable>
+        ) : null}
+      </View>
     </View>
   );
 }
@@ -177,6 +200,13 @@ const styles = StyleSheet.create({
     backgroundColor: colors.nav,
     paddingHorizontal: spacing.md,
     paddingBottom: spacing.xs,
+  },
+  morePanel: {
+    backgroundColor: colors.nav,
+    borderTopWidth: 1,
+    borderTopColor: colors.navBorder,
+    padding: spacing.sm,
+    gap: spacing.xs,
   },
   tabBar: {
     flexDirection: 'row',

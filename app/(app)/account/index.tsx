@@ -1,0 +1,39 @@
+import { StyleSheet, View } from 'react-native';
+import { Card } from '../../../components/ui/card';
+import { LoadingState } from '../../../components/ui/loading-state';
+import { Screen } from '../../../components/ui/screen';
+import { Text } from '../../../components/ui/text';
+import { UnitSwitch } from '../../../components/units/unit-switch';
+import { spacing } from '../../../constants/theme';
+import { useSessionQuery } from '../../../hooks/use-session';
+import { ROLE_LABELS } from '../../../shared/schemas/auth';
+
+export default function AccountScreen() {
+  const { data: me } = useSessionQuery();
+  if (!me) return <LoadingState />;
+  return (
+    <Screen narrow>
+      <View style={styles.header}>
+        <Text variant="title" headingLevel={1}>
+          Your settings
+        </Text>
+        <Text tone="muted">
+          {me.name} · {me.email} · {ROLE_LABELS[me.role]}
+        </Text>
+      </View>
+      <Card>
+        <Text variant="heading" headingLevel={2}>
+          Units
+        </Text>
+        <Text tone="muted">
+          Temperatures in °C or °F, tube and lengths in mm or inches, mass in kg or lb, stress in MPa or ksi. Saved for you on every device; Dilato keeps its figures in SI either way.
+        </Text>
+        <UnitSwitch />
+      </Card>
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  header: { gap: spacing.xs },
+});

@@ -1,0 +1,108 @@
+import { StyleSheet, View } from 'react-native';
+import { colors, radii, spacing } from '../../constants/theme';
+import { fixedPointLabel } from '../../shared/jobs/fixed-points';
+import type { JobDetail, RunView } from '../../shared/schemas/jobs';
+import { type UnitSystem, wallMmToGauge } from '../../shared/units';
+import { CautionsNote } from '../alloys/cautions-note';
+import { Text } from '../ui/text';
+import { show, showMoney } from '../units/format';
+import { runLength, runPeak } from './run-card';
+import { runVerdicts } from './run-verdict';
+
+function Row({ label, value }: { label: string; value: string }) {
+  return (
+    <View style={styles.row} role="group" aria-label={label}>
+      <Text variant="label" style={styles.rowLabel}>
+        {label}
+      </Text>
+      <Text style={styles.rowValue}>{value}</Text>
+    </View>
+  );
+}
+
+function jointLine(run: RunView, units: UnitSystem): string {
+  const j = run.joint;
+  const r = run.result;
+  if (j.type === 'none') return 'None';
+  if (j.type === 'flex') {
+    const chosen = r?.flex?.chosen;
+    if (!chosen) return r?.flex?.noneFitsReason ?? 'Flex section: no part fits';
+    const at = j.atMm === undefined ? '' : `, ${show('length', j.atMm, units)} from the start`;
+    return `Flex section ${chosen.name}${at}; pre-set: stretch ${show('smallLength', chosen.presetMm, units)} cold`;
+  }
+  const s = r?.slip;
+  const verdict = s ? (s.verdict === 'seizes' ? 'seizes hot' : s.bottomsOut ? 'bottoms out' : s.engagementOk ? 'slides hot' : 'engagement short when hot') : 'not worked out';
+  return `Slip joint: engage ${show('length', j.coldEngagementMm, units)}, leave a ${show('length', j.coldAxialGapMm, units)} gap, clearance ${show(
+    'smallLength',
+    j.coldClearanceMm,
+    units,
+  )} on the diameter (${verdict})`;
+}
+
+function SheetRun({ run, units }: { run: RunView; units: UnitSystem }) {
+  const gauge = wallMmToGauge(run.tube.wallMm);
+  const alloy = run.alloy ? `${run.alloy.designation}, UNS ${run.alloy.uns}, data version ${run.alloy.version}` : 'Unknown alloy';
+  const cuts = run.segments.map((s) => show('length', s.lengthMm, units)).join(' + ');
+  const temps = run.segments.map((s) => `${show('temperature', s.startTempC, units)} → ${show('temperature', s.endTempC, units)}`).join('; ');
+  return (
+    <View style={styles.run} role="article" aria-label={`Run ${run.position}: ${run.name}`}>
+      <Text variant="bodyStrong">
+        {run.position}. {run.name}
+      </Text>
+      <Row label="Alloy" value={alloy} />
+      <Row label="Tube" value={`${show('length', run.tube.odMm, units)} OD × ${show('smallLength', run.tube.wallMm, units)} wall${gauge === null ? '' : ` (${gauge} ga)`}`} />
+      <Row label="Cut lengths" value={run.segments.length > 1 ? `${cuts} = ${show('length', runLength(run), units)}` : cuts} />
+      <Row label="Ends" value={`${fixedPointLabel(run.startFixing)} to ${fixedPointLabel(run.endFixing)}`} />
+      <Row label="Temperatures" value={`install ${show('temperature', run.installTempC, units)}; ${temps}; peak ${show('temperature', runPeak(run), units)}`} />
+      <Row label="Growth" value={run.result ? show('smallLength', run.result.growthMm, units) : (run.problem?.message ?? '—')} />
+      <Row label="Joint" value={jointLine(run, units)} />
+      <Row label="Verdict" value={runVerdicts(run).map((v) => v.label).join(', ') || '—'} />
+      {run.notes ? <Row label="Notes" value={run.notes} /> : null}
+    </View>
+  );
+}
+
+/** One job for the bench: every run's material, cuts, temperatures, growth and joint, with the cautions. */
+export function JobSheet({ job, units }: { job: JobDetail; units: UnitSystem }) {
+  const t = job.totals;
+  return (
+    <View style={styles.sheet}>
+      <View style={styles.head}>
+        <Text variant="overline" tone="muted">
+          Dilato job sheet
+        </Text>
+        <Text variant="title" headingLevel={1}>
+          {job.name}
+        </Text>
+        <Text>
+          {job.customer} · {job.application}
+        </Text>
+        <Text variant="caption" tone="muted">
+          Printed {new Date().toLocaleDateString('en-GB', { dateStyle: 'medium' })}. Units: {units === 'metric' ? 'mm, °C, kg' : 'in, °F, lb'}.
+        </Text>
+      </View>
+      <View style={styles.totals} role="group" aria-label="System totals">
+        <Row label="Runs" value={String(t.runCount)} />
+        <Row label="Total growth" value={show('smallLength', t.growthMm, units)} />
+        <Row label="Total tube length" value={show('length', t.lengthMm, units)} />
+        <Row label="Total mass" value={show('mass', t.massKg, units)} />
+        <Row label="Material cost" value={showMoney(t.materialCost, t.currency)} />
+      </View>
+      {job.runs.length === 0 ? <Text tone="muted">This job has no runs yet.</Text> : null}
+      {job.runs.map((run) => (
+        <SheetRun key={run.id} run={run} units={units} />
+      ))}
+      <CautionsNote />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  sheet: { gap: spacing.lg },
+  head: { gap: spacing.xxs },
+  totals: { gap: spacing.xxs, padding: spacing.md, borderWidth: 1, borderColor: colors.borderStrong, borderRadius: radii.md },
+  run: { gap: spacing.xxs, padding: spacing.md, borderWidth: 1, borderColor: colors.border, borderRadius: radii.md, backgroundColor: colors.surfaceRaised },
+  row: { flexDirection: 'row', flexWrap: 'wrap', columnGap: spacing.md },
+  rowLabel: { minWidth: 120 },
+  rowValue: { flex: 1, minWidth: 200 },
+});

@@ -1,0 +1,119 @@
+import { useState } from 'react';
+import { Pressable, StyleSheet, View } from 'react-native';
+import { colors, radii, spacing, touchTarget } from '../../constants/theme';
+import { messageOf } from '../../hooks/api-client';
+import { useAlloysQuery } from '../../hooks/use-alloys';
+import type { UnitSystem } from '../../shared/units';
+import { Button } from '../ui/button';
+import { ErrorBanner } from '../ui/error-banner';
+import { LoadingState } from '../ui/loading-state';
+import { pressState } from '../ui/press-state';
+import { Text } from '../ui/text';
+import { TextField } from '../ui/text-field';
+import { show } from '../units/format';
+
+export interface AlloyPickerProps {
+  value: string;
+  /** The alloy's name as the run knows it, shown while the list is closed. */
+  currentLabel: string | null;
+  onChange: (alloyId: string) => void;
+  units: UnitSystem;
+  error?: string;
+  disabled?: boolean;
+}
+
+/** One published alloy from the catalogue, found by designation or UNS number. */
+export function AlloyPicker({ value, currentLabel, onChange, units, error, disabled = false }: AlloyPickerProps) {
+  const [open, setOpen] = useState(!value);
+  const [search, setSearch] = useState('');
+  const alloys = useAlloysQuery({ search: search.trim() || undefined });
+  const chosen = alloys.data?.items.find((a) => a.id === value);
+  const label = chosen ? `${chosen.designation} (${chosen.uns})` : currentLabel;
+
+  return (
+    <View style={styles.wrapper}>
+      <Text variant="label">Alloy</Text>
+      <View style={styles.current}>
+        <Text variant="bodyStrong" style={styles.grow}>
+          {label ?? 'No alloy chosen'}
+        </Text>
+        {disabled ? null : (
+          <Button
+            label={open ? 'Close the list' : 'Change alloy'}
+            variant="secondary"
+            compact
+            accessibilityState={{ expanded: open }}
+            onPress={() => setOpen((o) => !o)}
+          />
+        )}
+      </View>
+      {error ? (
+        <Text variant="caption" tone="danger">
+          {error}
+        </Text>
+      ) : null}
+      {open && !disabled ? (
+        <View style={styles.list}>
+          <TextField label="Search alloys" hint="Designation or UNS number" value={search} onChangeText={setSearch} autoCorrect={false} autoCapitalize="none" />
+          {alloys.isPending ? (
+            <LoadingState label="Loading alloys…" />
+          ) : alloys.isError ? (
+            <ErrorBanner message={messageOf(alloys.error)} onRetry={() => void alloys.refetch()} />
+          ) : alloys.data.items.length === 0 ? (
+            <Text tone="muted">No published alloy matches “{search}”.</Text>
+          ) : (
+            <View accessibilityRole="radiogroup" accessibilityLabel="Published alloys" style={styles.options}>
+              {alloys.data.items.map((a) => {
+                const selected = a.id === value;
+                const limit = Math.min(a.maxContinuousC, a.maxIntermittentC);
+                return (
+                  <Pressable
+                    key={a.id}
+                    accessibilityRole="radio"
+                    accessibilityLabel={a.designation}
+                    accessibilityState={{ checked: selected }}
+                    aria-checked={selected}
+                    onPress={() => {
+                      onChange(a.id);
+                      setOpen(false);
+                    }}
+                    style={(state) => {
+                      const { focused, hovered } = pressState(state);
+                      return [styles.option, selected && styles.selected, hovered && styles.hovered, focused && styles.focused];
+                    }}
+                  >
+                    <Text variant="bodyStrong">{a.designation}</Text>
+                    <Text variant="caption" tone="muted">
+                      {a.uns} · limit {show('temperature', limit, units)}
+                    </Text>
+                  </Pressable>
+                );
+              })}
+            </View>
+          )}
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrapper: { gap: spacing.xs },
+  current: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.md },
+  grow: { flexGrow: 1 },
+  list: { gap: spacing.sm },
+  options: { gap: spacing.xs },
+  option: {
+    minHeight: touchTarget,
+    justifyContent: 'center',
+    paddingHorizontal: spacing.md,
+    paddingVertical: spacing.xs,
+    borderRadius: radii.md,
+    borderWidth: 2,
+    borderColor: colors.border,
+    backgroundColor: colors.surfaceRaised,
+  },
+  selected: { borderColor: colors.primary, backgroundColor: colors.primarySoft },
+  hovered: { backgroundColor: colors.surfaceSunken },
+  focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid', outlineOffset: 2 },
+});

@@ -1,0 +1,185 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { Controller, useForm, useWatch } from 'react-hook-form';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { layout, spacing } from '../../constants/theme';
+import { isApiError, messageOf } from '../../hooks/api-client';
+import { FIXED_POINTS } from '../../shared/jobs/fixed-points';
+import { runFieldsSchema, type RunFields } from '../../shared/schemas/jobs';
+import type { UnitSystem } from '../../shared/units';
+import { Section } from '../alloys/section';
+import { ChoicePicker } from '../quotes/choice-picker';
+import { Button } from '../ui/button';
+import { Card } from '../ui/card';
+import { ErrorBanner } from '../ui/error-banner';
+import { Text } from '../ui/text';
+import { TextField } from '../ui/text-field';
+import { UnitNumberField } from '../units/unit-number-field';
+import { AlloyPicker } from './alloy-picker';
+import { flattenErrors, mergeMessages, type FieldMessages } from './field-errors';
+import { JointFields } from './joint-fields';
+import { RunResults } from './run-results';
+import { SegmentsField } from './segments-field';
+import { TubeFields } from './tube-fields';
+import { useDebounced, useLiveResult } from './use-live-result';
+
+const FIXING_CHOICES = FIXED_POINTS.map((p) => ({ value: p.id, label: p.label }));
+
+export interface RunEditorProps {
+  defaultValues: RunFields;
+  units: UnitSystem;
+  /** The alloy's name as last saved, shown before the catalogue list loads. */
+  alloyLabel: string | null;
+  editable: boolean;
+  saveLabel: string;
+  /** Saves the run; a rejection keeps every edit on screen with the server's messages. */
+  onSave: (values: RunFields) => Promise<unknown>;
+}
+
+/** The run's inputs with its results beside them (under them on a phone), recomputed as the person types. */
+export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabel, onSave }: RunEditorProps) {
+  const wide = useWindowDimensions().width >= layout.wideBreakpoint;
+  const [failure, setFailure] = useState<string>();
+  const [serverFields, setServerFields] = useState<FieldMessages>({});
+  const [saved, setSaved] = useState(false);
+  const {
+    control,
+    handleSubmit,
+    reset,
+    formState: { errors, isSubmitting, isDirty },
+  } = useForm<RunFields>({ resolver: zodResolver(runFieldsSchema), defaultValues });
+  const values = useWatch({ control }) as RunFields;
+  const settled = useDebounced(values);
+  const live = useLiveResult(settled);
+  const engineFields = live.state === 'outside' ? live.fields : {};
+  const messages = mergeMessages(serverFields, flattenErrors(errors), engineFields);
+  const peakC = Math.max(...values.segments.flatMap((s) => [s.startTempC, s.endTempC]).filter(Number.isFinite));
+
+  const submit = handleSubmit(
+    async (v) => {
+      setFailure(undefined);
+      setServerFields({});
+      setSaved(false);
+      try {
+        await onSave(v);
+        reset(v);
+        setSaved(true);
+      } catch (error) {
+        setServerFields(isApiError(error) ? error.fields : {});
+        setFailure(messageOf(error));
+      }
+    },
+    () => setFailure('Some inputs need attention: see the messages under the fields.'),
+  );
+
+  const form = (
+    <View style={styles.form}>
+      <Controller
+        control={control}
+        name="name"
+        render={({ field: { value, onChange, onBlur } }) => (
+          <TextField label="Run name" value={value} onChangeText={onChange} onBlur={onBlur} error={messages.name} editable={editable} />
+        )}
+      />
+      <Controller
+        control={control}
+        name="alloyId"
+        render={({ field: { value, onChange } }) => (
+          <AlloyPicker value={value} currentLabel={alloyLabel} onChange={onChange} units={units} error={messages.alloyId} disabled={!editable} />
+        )}
+      />
+      <Section title="Tube">
+        <Controller
+          control={control}
+          name="tube"
+          render={({ field: { value, onChange } }) => (
+            <TubeFields value={value} onChange={onChange} units={units} errors={messages} disabled={!editable} />
+          )}
+        />
+      </Section>
+      <Section title="Temperatures along the run" intro="From the run’s start; each segment’s temperature goes straight from start to end.">
+        <Controller
+          control={control}
+          name="installTempC"
+          render={({ field: { value, onChange, onBlur } }) => (
+            <UnitNumberField
+              label="Install temperature"
+              kind="temperature"
+              units={units}
+              value={value}
+              onChange={onChange}
+              onBlur={onBlur}
+              hint="The shop’s temperature when the run is fitted"
+              error={messages.installTempC}
+              editable={editable}
+            />
+          )}
+        />
+        <SegmentsField control={control} units={units} errors={messages} disabled={!editable} />
+      </Section>
+      <Section title="Ends and joint">
+        <Controller
+          control={control}
+          name="startFixing"
+          render={({ field: { value, onChange } }) => (
+            <ChoicePicker label="Start held by" choices={FIXING_CHOICES} value={value} onChange={onChange} error={messages.startFixing} disabled={!editable} />
+          )}
+        />
+        <Controller
+          control={control}
+          name="endFixing"
+          render={({ field: { value, onChange } }) => (
+            <ChoicePicker label="End held by" choices={FIXING_CHOICES} value={value} onChange={onChange} error={messages.endFixing} disabled={!editable} />
+          )}
+        />
+        <Controller
+          control={control}
+          name="joint"
+          render={({ field: { value, onChange } }) => (
+            <JointFields value={value} onChange={onChange} peakC={peakC} units={units} errors={messages} disabled={!editable} />
+          )}
+        />
+      </Section>
+      <Controller
+        control={control}
+        name="notes"
+        render={({ field: { value, onChange, onBlur } }) => (
+          <TextField label="Notes" value={value} onChangeText={onChange} onBlur={onBlur} error={messages.notes} multiline editable={editable} />
+        )}
+      />
+      {editable ? (
+        <View style={styles.save}>
+          {failure ? <ErrorBanner title="The run was not saved" message={`${failure} Your edits are still here.`} /> : null}
+          {saved && !isDirty ? (
+            <View accessible accessibilityRole="alert" aria-live="polite">
+              <Text tone="success" variant="bodyStrong">
+                Saved. The server worked the results out again from the published data.
+              </Text>
+            </View>
+          ) : isDirty ? (
+            <Text tone="warning">Unsaved changes</Text>
+          ) : null}
+          <Button label={saveLabel} loading={isSubmitting} onPress={() => void submit()} />
+        </View>
+      ) : null}
+    </View>
+  );
+
+  return (
+    <View style={wide ? styles.columns : styles.stack}>
+      <Card style={wide ? styles.formColumn : undefined}>{form}</Card>
+      <View style={wide ? styles.resultsColumn : undefined}>
+        <RunResults live={live} fields={settled} units={units} />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  stack: { gap: spacing.xxl },
+  columns: { flexDirection: 'row', alignItems: 'flex-start', gap: spacing.xl },
+  formColumn: { flex: 1, minWidth: 0 },
+  resultsColumn: { flex: 1, minWidth: 0 },
+  form: { gap: spacing.xl },
+  save: { gap: spacing.md },
+});

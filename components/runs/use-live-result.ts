@@ -1,0 +1,91 @@
+import { useEffect, useMemo, useState } from 'react';
+import { useAlloyQuery } from '../../hooks/use-alloys';
+import { useFlexPartsQuery } from '../../hooks/use-flex-parts';
+import { toAlloyData } from '../../shared/catalogue/to-alloy-data';
+import { calculateRun } from '../../shared/engine/calculate-run';
+import { isEngineInputError } from '../../shared/engine/errors';
+import type { FlexPart, RunResult } from '../../shared/engine/types';
+import { runFields, toCalcRequest } from '../../shared/jobs/run-input';
+import type { FlexPartView } from '../../shared/schemas/alloy';
+import { runFieldsSchema, type AlloyUsed, type RunFields } from '../../shared/schemas/jobs';
+import type { FieldMessages } from './field-errors';
+
+export const LIVE_DELAY_MS = 250;
+
+/** The value as it was `delayMs` after it last changed, so typing does not recompute on every key. */
+export function useDebounced<T>(value: T, delayMs = LIVE_DELAY_MS): T {
+  const [settled, setSettled] = useState(value);
+  const key = JSON.stringify(value);
+  useEffect(() => {
+    const timer = setTimeout(() => setSettled(value), delayMs);
+    return () => clearTimeout(timer);
+    // The key stands for the value: a new object with the same content is no change.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [key, delayMs]);
+  return settled;
+}
+
+export type LiveResult =
+  | { state: 'waiting'; message: string; fields: FieldMessages }
+  | { state: 'loading' }
+  | { state: 'unavailable'; message: string }
+  | { state: 'outside'; message: string; fields: FieldMessages; alloy: AlloyUsed }
+  | { state: 'ok'; result: RunResult; alloy: AlloyUsed; currency: string };
+
+/** The catalogue's flex parts as the server's sizing reads them. */
+const toFlexPart = (p: FlexPartView): FlexPart => ({
+  id: p.id,
+  name: `${p.code} ${p.name}`,
+  boreMm: p.boreMm,
+  liveLengthMm: p.liveLengthMm,
+  ratedAxialCompressionMm: p.ratedAxialCompressionMm,
+  ratedAxialExtensionMm: p.ratedAxialExtensionMm,
+  lateralOffsetMm: p.lateralOffsetMm,
+  maxTempC: p.maxTempC,
+  price: p.price,
+});
+
+/** The run computed in the browser by the shared engine from the published data, as the server will on save. */
+export function useLiveResult(fields: RunFields): LiveResult {
+  const key = JSON.stringify(fields);
+  // eslint-disable-next-line react-hooks/exhaustive-deps
+  const parsed = useMemo(() => runFieldsSchema.safeParse(fields), [key]);
+  const alloyId = fields.alloyId || undefined;
+  const alloy = useAlloyQuery(alloyId);
+  const slip = fields.joint.type === 'slip' ? fields.joint : null;
+  const inner = useAlloyQuery(slip?.inner.alloyId);
+  const outer = useAlloyQuery(slip?.outer.alloyId);
+  const flex = useFlexPartsQuery(false);
+
+  return useMemo((): LiveResult => {
+    if (!parsed.success) {
+      const messages: FieldMessages = {};
+      for (const issue of parsed.error.issues) {
+        const path = issue.path.map(String).join('.');
+        if (!(path in messages)) messages[path] = issue.message;
+      }
+      return { state: 'waiting', message: parsed.error.issues[0]?.message ?? 'Check the inputs', fields: messages };
+    }
+    if (alloy.isPending || (slip?.inner.alloyId && inner.isPending) || (slip?.outer.alloyId && outer.isPending)) return { state: 'loading' };
+    if (fields.joint.type === 'flex' && flex.isPending) return { state: 'loading' };
+    const published = alloy.data?.published;
+    if (!published || alloy.data?.status !== 'published') {
+      return { state: 'unavailable', message: alloy.isError ? 'The alloy’s data did not load.' : 'This alloy has no published data to compute with.' };
+    }
+    const used: AlloyUsed = { id: alloy.data.id, designation: published.designation, uns: published.uns, version: published.version, status: 'published' };
+    const member = (q: typeof inner) => (q.data?.published ? toAlloyData(q.data.published) : undefined);
+    try {
+      const result = calculateRun(toCalcRequest(parsed.data), toAlloyData(published), {
+        flexParts: (flex.data ?? []).map(toFlexPart),
+        slipAlloys: { inner: member(inner), outer: member(outer) },
+      });
+      return { state: 'ok', result, alloy: used, currency: published.currency };
+    } catch (error) {
+      if (!isEngineInputError(error)) throw error;
+      const mapped = runFields(error.fields);
+      const first = Object.values(mapped)[0] ?? error.message;
+      return { state: 'outside', message: `The published data of ${used.designation}, version ${used.version}, does not cover this run: ${first}.`, fields: mapped, alloy: used };
+    }
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [parsed, alloy.isPending, alloy.data, alloy.isError, inner.isPending, inner.data, outer.isPending, outer.data, flex.isPending, flex.data]);
+}

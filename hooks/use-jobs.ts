@@ -1,0 +1,69 @@
+import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { JobCreateInput, JobDetail, JobPatchInput, JobSummary } from '../shared/schemas/jobs';
+import { api } from './api-client';
+
+export type JobStatusFilter = 'active' | 'archived' | 'all';
+
+export interface JobListParams {
+  search?: string;
+  status: JobStatusFilter;
+}
+
+export const jobKeys = {
+  all: ['jobs'] as const,
+  lists: () => [...jobKeys.all, 'list'] as const,
+  list: (params: JobListParams) => [...jobKeys.lists(), params] as const,
+  detail: (id: string) => [...jobKeys.all, 'detail', id] as const,
+};
+
+const jobPath = (id: string) => `/jobs/${encodeURIComponent(id)}`;
+
+export function useJobsQuery(params: JobListParams) {
+  return useQuery({
+    queryKey: jobKeys.list(params),
+    queryFn: () => {
+      const query = new URLSearchParams({ status: params.status });
+      if (params.search?.trim()) query.set('search', params.search.trim());
+      return api.get<{ items: JobSummary[]; total: number }>(`/jobs?${query.toString()}`);
+    },
+    placeholderData: keepPreviousData,
+  });
+}
+
+export function useJobQuery(id: string | undefined) {
+  return useQuery({
+    queryKey: jobKeys.detail(id ?? ''),
+    queryFn: async () => (await api.get<{ job: JobDetail }>(jobPath(id!))).job,
+    enabled: Boolean(id),
+  });
+}
+
+export function useCreateJobMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: JobCreateInput) => (await api.post<{ job: JobDetail }>('/jobs', input)).job,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: jobKeys.all }),
+  });
+}
+
+export function useUpdateJobMutation(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (patch: JobPatchInput) => (await api.patch<{ job: JobDetail }>(jobPath(id), patch)).job,
+    onSuccess: (job) => {
+      queryClient.setQueryData(jobKeys.detail(id), job);
+      void queryClient.invalidateQueries({ queryKey: jobKeys.all });
+    },
+  });
+}
+
+export function useReorderRunsMutation(jobId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (runIds: string[]) => (await api.put<{ job: JobDetail }>(`${jobPath(jobId)}/runs/order`, { runIds })).job,
+    onSuccess: (job) => {
+      queryClient.setQueryData(jobKeys.detail(jobId), job);
+      void queryClient.invalidateQueries({ queryKey: jobKeys.all });
+    },
+  });
+}
