@@ -5,11 +5,11 @@ import type { AlloySummary } from '../../shared/schemas/alloy';
 import type { UnitSystem } from '../../shared/units';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
-import { CheckBox } from './check-box';
-import { Fact } from './fact';
+import { CheckBox } from '../ui/check-box';
+import { Fact } from '../ui/fact';
 import { familyLabel, formatTemp } from './format';
 import { statusTags, summaryValues } from './summary-values';
-import { Tag } from './tag';
+import { Tag } from '../ui/tag';
 
 export interface AlloyRowProps {
   alloy: AlloySummary;

@@ -4,7 +4,7 @@ import { ALLOY_FAMILIES, type AlloyFamily } from '../../shared/schemas/alloy';
 import { fromDisplay, unitLabel, type UnitSystem } from '../../shared/units';
 import { SegmentedControl } from '../ui/segmented-control';
 import { TextField } from '../ui/text-field';
-import { CheckBox } from './check-box';
+import { CheckBox } from '../ui/check-box';
 import { familyLabel } from './format';
 
 export type AlloySort = 'designation' | 'limit' | 'expansion' | 'price';

@@ -19,11 +19,11 @@ import { ErrorBanner } from '../ui/error-banner';
 import { SegmentedControl } from '../ui/segmented-control';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
-import { CheckBox } from './check-box';
+import { CheckBox } from '../ui/check-box';
 import { familyLabel } from './format';
-import { NumberField } from './number-field';
+import { NumberField } from '../ui/number-field';
 import { PointsTableField } from './points-table-field';
-import { placeServerErrors } from './server-errors';
+import { placeServerErrors } from '../ui/server-errors';
 import { SourcePicker } from './source-picker';
 
 const FAMILY_OPTIONS = ALLOY_FAMILIES.map((f) => ({ value: f, label: familyLabel(f) }));

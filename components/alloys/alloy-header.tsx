@@ -3,7 +3,7 @@ import { spacing } from '../../constants/theme';
 import type { AlloyDetail, AlloyVersionView } from '../../shared/schemas/alloy';
 import { Text } from '../ui/text';
 import { familyLabel, formatWhen } from './format';
-import { Tag } from './tag';
+import { Tag } from '../ui/tag';
 
 /** Designation, UNS, family, and which version the page is showing. */
 export function AlloyHeader({ alloy, shown }: { alloy: AlloyDetail; shown: AlloyVersionView }) {

@@ -4,9 +4,9 @@ import type { AlloyVersionView } from '../../shared/schemas/alloy';
 import type { UnitSystem } from '../../shared/units';
 import { Text } from '../ui/text';
 import { formatCte, formatDensity, formatModulus, formatPrice, formatStress, formatTemp, formatTempRange } from './format';
-import { Fact } from './fact';
+import { Fact } from '../ui/fact';
 import { Cite, type SourceIndex } from './source-citation';
-import { Tag } from './tag';
+import { Tag } from '../ui/tag';
 
 export interface AlloyPropertiesProps {
   version: AlloyVersionView;

@@ -4,10 +4,10 @@ import { colors, radii, spacing, typography } from '../../constants/theme';
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import type { UnitSystem } from '../../shared/units';
 import { Text } from '../ui/text';
-import { CheckBox } from './check-box';
+import { CheckBox } from '../ui/check-box';
 import { familyLabel, formatTemp } from './format';
 import { statusTags, summaryValues } from './summary-values';
-import { Tag } from './tag';
+import { Tag } from '../ui/tag';
 
 export interface AlloyTableProps {
   alloys: AlloySummary[];

@@ -6,7 +6,7 @@ import { LineChart } from '../charts/line-chart';
 import { Text } from '../ui/text';
 import { COLD_C, growthAt, growthCurve, maxDataC } from './curves';
 import { familyLabel, formatDensity, formatGrowth, formatPrice, formatTemp } from './format';
-import { Tag } from './tag';
+import { Tag } from '../ui/tag';
 
 export interface CompareViewProps {
   alloys: AlloyVersionView[];

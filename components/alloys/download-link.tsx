@@ -1,5 +1,5 @@
 import { Text } from '../ui/text';
-import { linkStyles } from './text-link';
+import { linkStyles } from '../ui/text-link';
 
 export interface DownloadLinkProps {
   href: string;

@@ -5,7 +5,7 @@ import type { AlloyInput, AlloyInputDraft, SourceInput, SourceView } from '../..
 import { unitLabel, type UnitSystem } from '../../shared/units';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
-import { NumberField } from './number-field';
+import { NumberField } from '../ui/number-field';
 import { SourcePicker } from './source-picker';
 
 export type PointTable = 'cte' | 'modulus' | 'yield';

@@ -4,7 +4,7 @@ import type { Role } from '../../shared/schemas/auth';
 import { EmptyState } from '../ui/empty-state';
 import { LoadingState } from '../ui/loading-state';
 import { Screen } from '../ui/screen';
-import { TextLink } from './text-link';
+import { TextLink } from '../ui/text-link';
 
 /** Shows the screen only to the roles that may use it; the server refuses the rest regardless. */
 export function RoleGate({ roles, title, children }: { roles: readonly Role[]; title: string; children: ReactNode }) {

@@ -2,7 +2,7 @@ import { Linking, StyleSheet, View } from 'react-native';
 import { colors, spacing, typography } from '../../constants/theme';
 import { SOURCE_KIND_LABELS, type SourceView } from '../../shared/schemas/alloy';
 import { Text } from '../ui/text';
-import { Tag } from './tag';
+import { Tag } from '../ui/tag';
 
 export type SourceIndex = Map<string, { n: number; source: SourceView }>;
 

@@ -8,7 +8,7 @@ import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { sourceLabel } from './format';
 import { NewSourceForm } from './new-source-form';
-import { Tag } from './tag';
+import { Tag } from '../ui/tag';
 
 export interface SourcePickerProps {
   /** Visible label and accessible name, e.g. "Source of the density". */

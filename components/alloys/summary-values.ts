@@ -1,7 +1,7 @@
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import type { UnitSystem } from '../../shared/units';
 import { formatGrowth, formatPrice, formatTemp } from './format';
-import type { TagTone } from './tag';
+import type { TagTone } from '../ui/tag';
 
 /** The list's values for one alloy, as the card and the table both show them. */
 export function summaryValues(alloy: AlloySummary, units: UnitSystem) {

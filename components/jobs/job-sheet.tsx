@@ -3,7 +3,7 @@ import { colors, radii, spacing } from '../../constants/theme';
 import { fixedPointLabel } from '../../shared/jobs/fixed-points';
 import type { JobDetail, RunView } from '../../shared/schemas/jobs';
 import { type UnitSystem, wallMmToGauge } from '../../shared/units';
-import { CautionsNote } from '../alloys/cautions-note';
+import { CautionsNote } from '../ui/cautions-note';
 import { Text } from '../ui/text';
 import { show, showMoney } from '../units/format';
 import { runLength, runPeak } from './run-card';

@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import type { JobTotals } from '../../shared/schemas/jobs';
 import type { UnitSystem } from '../../shared/units';
-import { Fact } from '../alloys/fact';
+import { Fact } from '../ui/fact';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { show, showMoney } from '../units/format';

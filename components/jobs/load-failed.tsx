@@ -1,6 +1,6 @@
 import type { Href } from 'expo-router';
 import { messageOf } from '../../hooks/api-client';
-import { TextLink } from '../alloys/text-link';
+import { TextLink } from '../ui/text-link';
 import { ErrorBanner } from '../ui/error-banner';
 import { Screen } from '../ui/screen';
 

@@ -5,7 +5,7 @@ import { spacing } from '../../constants/theme';
 import { fixedPointLabel } from '../../shared/jobs/fixed-points';
 import type { RunView } from '../../shared/schemas/jobs';
 import type { UnitSystem } from '../../shared/units';
-import { Fact } from '../alloys/fact';
+import { Fact } from '../ui/fact';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';

@@ -1,7 +1,7 @@
 import { isRestrained } from '../../shared/jobs/fixed-points';
 import type { LimitStatus } from '../../shared/engine/types';
 import type { RunView } from '../../shared/schemas/jobs';
-import type { TagTone } from '../alloys/tag';
+import type { TagTone } from '../ui/tag';
 
 export interface Verdict {
   label: string;

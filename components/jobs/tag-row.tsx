@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
-import { Tag } from '../alloys/tag';
+import { Tag } from '../ui/tag';
 import type { Verdict } from './run-verdict';
 
 export function VerdictTags({ verdicts, label = 'Verdict' }: { verdicts: Verdict[]; label?: string }) {

@@ -6,7 +6,7 @@ import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
-import { type Choice, ChoicePicker } from './choice-picker';
+import { type Choice, ChoicePicker } from '../ui/choice-picker';
 import { RunOverrides } from './run-overrides';
 
 export interface OptionFieldsProps {

@@ -12,11 +12,11 @@ import { Card } from '../ui/card';
 import { ErrorBanner } from '../ui/error-banner';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
-import { ChoicePicker } from './choice-picker';
+import { ChoicePicker } from '../ui/choice-picker';
 import { pricedAlloys } from './live-pricing';
 import { LivePricingPanel } from './live-pricing-panel';
 import { OptionFields } from './option-fields';
-import { placeServerErrors } from './server-errors';
+import { placeServerErrors } from '../ui/server-errors';
 
 export const MIN_OPTIONS = 2;
 export const MAX_OPTIONS = 4;

@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
-import { type Choice, ChoicePicker } from './choice-picker';
+import { type Choice, ChoicePicker } from '../ui/choice-picker';
 
 export interface RunOverridesProps {
   optionNumber: number;

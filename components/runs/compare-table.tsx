@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '../../constants/theme';
 import type { CompareRow } from '../../shared/schemas/jobs';
 import type { UnitSystem } from '../../shared/units';
-import { Fact } from '../alloys/fact';
+import { Fact } from '../ui/fact';
 import { LIMIT_VERDICTS } from '../jobs/run-verdict';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';

@@ -1,11 +1,11 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
-import { CautionsNote } from '../../../components/alloys/cautions-note';
+import { CautionsNote } from '../../../components/ui/cautions-note';
 import { MAX_COMPARE } from '../../../components/alloys/compare-bar';
 import { CompareView } from '../../../components/alloys/compare-view';
 import { CATALOGUE_UNITS } from '../../../components/alloys/format';
-import { NumberField } from '../../../components/alloys/number-field';
-import { TextLink } from '../../../components/alloys/text-link';
+import { NumberField } from '../../../components/ui/number-field';
+import { TextLink } from '../../../components/ui/text-link';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorBanner } from '../../../components/ui/error-banner';
 import { LoadingState } from '../../../components/ui/loading-state';

@@ -3,7 +3,7 @@ import { AlloyForm } from '../../../../components/alloys/alloy-form';
 import { toFormValues } from '../../../../components/alloys/alloy-form-values';
 import { CATALOGUE_UNITS } from '../../../../components/alloys/format';
 import { EDITORS, RoleGate } from '../../../../components/alloys/role-gate';
-import { TextLink } from '../../../../components/alloys/text-link';
+import { TextLink } from '../../../../components/ui/text-link';
 import { ErrorBanner } from '../../../../components/ui/error-banner';
 import { LoadingState } from '../../../../components/ui/loading-state';
 import { Screen } from '../../../../components/ui/screen';

@@ -4,7 +4,7 @@ import { sourceMap } from '../../../../components/alloys/diff-text';
 import { CATALOGUE_UNITS } from '../../../../components/alloys/format';
 import { RoleGate } from '../../../../components/alloys/role-gate';
 import { StatusActions } from '../../../../components/alloys/status-actions';
-import { TextLink } from '../../../../components/alloys/text-link';
+import { TextLink } from '../../../../components/ui/text-link';
 import { Card } from '../../../../components/ui/card';
 import { EmptyState } from '../../../../components/ui/empty-state';
 import { ErrorBanner } from '../../../../components/ui/error-banner';

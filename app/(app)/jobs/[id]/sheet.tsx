@@ -1,6 +1,6 @@
 import { useLocalSearchParams } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
-import { TextLink } from '../../../../components/alloys/text-link';
+import { TextLink } from '../../../../components/ui/text-link';
 import { LoadFailed } from '../../../../components/jobs/load-failed';
 import { JobSheet } from '../../../../components/jobs/job-sheet';
 import { canPrint, printPage, PrintStyle } from '../../../../components/jobs/print-style';

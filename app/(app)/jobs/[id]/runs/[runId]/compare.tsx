@@ -1,9 +1,9 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
-import { CautionsNote } from '../../../../../../components/alloys/cautions-note';
-import { CheckBox } from '../../../../../../components/alloys/check-box';
-import { TextLink } from '../../../../../../components/alloys/text-link';
+import { CautionsNote } from '../../../../../../components/ui/cautions-note';
+import { CheckBox } from '../../../../../../components/ui/check-box';
+import { TextLink } from '../../../../../../components/ui/text-link';
 import { LoadFailed } from '../../../../../../components/jobs/load-failed';
 import { canEditJobs } from '../../../../../../components/jobs/roles';
 import { CompareTable } from '../../../../../../components/runs/compare-table';

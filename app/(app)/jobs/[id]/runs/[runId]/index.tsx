@@ -1,6 +1,6 @@
 import { useLocalSearchParams } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
-import { TextLink } from '../../../../../../components/alloys/text-link';
+import { TextLink } from '../../../../../../components/ui/text-link';
 import { LoadFailed } from '../../../../../../components/jobs/load-failed';
 import { canEditJobs } from '../../../../../../components/jobs/roles';
 import { alloyName } from '../../../../../../components/jobs/run-card';

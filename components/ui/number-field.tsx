@@ -1,6 +1,6 @@
 import { forwardRef, useState } from 'react';
 import type { TextInput } from 'react-native';
-import { TextField, type TextFieldProps } from '../ui/text-field';
+import { TextField, type TextFieldProps } from './text-field';
 
 export interface NumberFieldProps extends Omit<TextFieldProps, 'value' | 'onChangeText' | 'onChange'> {
   value: number | undefined | null;

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '../../constants/theme';
-import { Text } from '../ui/text';
+import { Text } from './text';
 
 export type TagTone = 'neutral' | 'warning' | 'primary' | 'danger' | 'success';
 

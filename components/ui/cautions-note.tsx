@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { colors, fonts, radii, spacing } from '../../constants/theme';
 import { CAUTIONS } from '../../shared/engine/cautions';
-import { Text } from '../ui/text';
+import { Text } from './text';
 
 /** The cautions that go with every expansion figure Dilato shows. */
 export function CautionsNote() {

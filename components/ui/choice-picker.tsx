@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, radii, spacing, touchTarget, typography } from '../../constants/theme';
-import { Text } from '../ui/text';
-import { pressState } from '../ui/press-state';
+import { Text } from './text';
+import { pressState } from './press-state';
 
 export interface Choice {
   value: string;

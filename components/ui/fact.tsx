@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
-import { Text } from '../ui/text';
+import { Text } from './text';
 
 /** A labelled value, named as a group so that "Density: 7960 kg/m³" reads as one thing. */
 export function Fact({ label, value, large = false, children }: { label: string; value: string; large?: boolean; children?: ReactNode }) {

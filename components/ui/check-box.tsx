@@ -1,7 +1,7 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, radii, spacing, touchTarget } from '../../constants/theme';
-import { pressState } from '../ui/press-state';
-import { Text } from '../ui/text';
+import { pressState } from './press-state';
+import { Text } from './text';
 
 export interface CheckBoxProps {
   label: string;

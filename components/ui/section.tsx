@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
-import { Text } from '../ui/text';
+import { Text } from './text';
 
 /** A titled part of a long page, so that headings give screen-reader users a map. */
 export function Section({ title, children, intro }: { title: string; intro?: string; children: ReactNode }) {
