@@ -17,8 +17,11 @@ const run: RunFields = {
   notes: '',
 };
 
+// gcTime Infinity: a query cache with a finite gcTime keeps a timer alive after the test ends.
+const client = new QueryClient({ defaultOptions: { queries: { retry: false, gcTime: Infinity } } });
+afterAll(() => client.clear());
+
 function wrapper({ children }: { children: ReactNode }) {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
   return <QueryClientProvider client={client}>{children}</QueryClientProvider>;
 }
 

@@ -140,7 +140,13 @@ describe('who may change the catalogue (every role × route)', () => {
     { what: 'create a source', call: (c) => c.post('/api/sources').send({ kind: 'handbook', title: 'A handbook for the test' }), allowed: ['engineer', 'admin'] },
     { what: 'edit an alloy', call: (c, id) => c.patch(`/api/alloys/${id}`).send({ notes: `edited ${Math.random()}` }), allowed: ['engineer', 'admin'] },
     { what: 'review a draft', call: (c, id) => c.get(`/api/alloys/${id}/review`), allowed: ['engineer', 'admin'] },
+    { what: 'read an old version', call: (c, id) => c.get(`/api/alloys/${id}/versions/1`), allowed: [...ROLES] },
+    { what: 'export the catalogue as CSV', call: (c) => c.get('/api/alloys/export.csv'), allowed: [...ROLES] },
+    { what: 'import a CSV', call: (c) => c.post('/api/alloys/import').set('Content-Type', 'text/csv').send('uns,designation,family,density_kg_m3,density_source,max_continuous_c,max_intermittent_c,limits_source,price_per_kg,currency,price_set_on,reference_temp_c,property,temp_c,value,source\n'), allowed: ['engineer', 'admin'] },
+    { what: 'create an alloy', call: async (c) => { nextUns += 1; return c.post('/api/alloys').send(await newAlloyBody(`N8${String(nextUns).padStart(4, '0')}`)); }, allowed: ['engineer', 'admin'] },
     { what: 'publish', call: (c, id) => c.post(`/api/alloys/${id}/publish`).send({}), allowed: ['admin'] },
+    { what: 'restore a retired alloy', call: async (c, id) => { await (await signedIn(t.app, 'admin')).post(`/api/alloys/${id}/retire`).send({}); return c.post(`/api/alloys/${id}/restore`).send({}); }, allowed: ['admin'] },
+    { what: 'change a flex part', call: async (c) => { const parts = (await c.get('/api/flex-parts')).body.items ?? []; return c.patch(`/api/flex-parts/${parts[0]?.id ?? 'none'}`).send({ price: 91 }); }, allowed: ['admin'] },
     { what: 'retire', call: (c, id) => c.post(`/api/alloys/${id}/retire`).send({}), allowed: ['admin'] },
     { what: 'create a flex part', call: (c) => c.post('/api/flex-parts').send({ code: `T-${Math.random().toString(36).slice(2, 8)}`, name: 'Test part', boreMm: 63.5, liveLengthMm: 150, ratedAxialCompressionMm: 10, ratedAxialExtensionMm: 5, lateralOffsetMm: 3, maxTempC: 800, price: 90, currency: 'EUR' }), allowed: ['admin'] },
   ];

@@ -88,7 +88,7 @@ export function LineChart({ title, summary, series, xAxis, yAxis, secondaryYAxis
           <VictoryChart
             width={width}
             height={height}
-            padding={{ top: spacing.lg, bottom: 56, left: 64, right: secondaryYAxis ? 64 : spacing.xl }}
+            padding={{ top: spacing.lg, bottom: 56, left: 64, right: secondaryYAxis ? 76 : spacing.xl }}
             domain={{ y: [primary.min, primary.max * 1.05] }}
           >
             <VictoryAxis
@@ -111,7 +111,7 @@ export function LineChart({ title, summary, series, xAxis, yAxis, secondaryYAxis
                 label={secondaryYAxis.label}
                 tickFormat={(t: number) => (secondaryYAxis.format ?? defaultFormat)(fromPrimary(t))}
                 style={axisStyle}
-                axisLabelComponent={<VictoryLabel dy={24} />}
+                axisLabelComponent={<VictoryLabel dy={10} />}
               />
             ) : null}
             {series.map((s, i) => (
