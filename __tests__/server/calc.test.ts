@@ -1,4 +1,5 @@
 import type { AlloyDetail, AlloySummary } from '../../shared/schemas/alloy';
+import { enStainlessElongation, meanCteTable } from '../shared/published';
 import { client, createTestApp, expectErrorShape, signedIn, type TestApp } from './test-app';
 
 let t: TestApp;
@@ -7,14 +8,10 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-/**
- * EN 1993-1-2 Annex C, austenitic stainless: Δl/l = (16 + 4.79e-3·θ − 1.243e-6·θ²)(θ − 20)·1e-6,
- * so the mean coefficient from 20 °C is the bracket itself. A table generated from the closed form.
- */
-const enAnnexC = (theta: number) => 16 + 4.79e-3 * theta - 1.243e-6 * theta * theta;
+// EN 1993-1-2 Annex C, austenitic stainless: a mean-CTE table generated from the closed form (20 °C basis).
 const EN_304 = {
   referenceTempC: 20,
-  cte: [100, 200, 300, 400, 500, 600, 700, 800, 900, 1000].map((tempC) => ({ tempC, meanUmPerMK: enAnnexC(tempC) })),
+  cte: meanCteTable(enStainlessElongation, [100, 200, 300, 400, 500, 600, 700, 800, 900, 1000]),
   modulus: [{ tempC: 20, gpa: 193 }],
   yield: [{ tempC: 20, mpa: 205 }],
   densityKgM3: 8000,

@@ -3,7 +3,7 @@ import { type LayoutChangeEvent, StyleSheet, View } from 'react-native';
 import { VictoryAxis, VictoryChart, VictoryLabel, VictoryLine, VictoryScatter } from 'victory-native';
 import { colors, fonts, spacing, typography } from '../../constants/theme';
 import { Text } from '../ui/text';
-import { seriesColor } from './chart-colors';
+import { chartAxisStyle, seriesColor } from './chart-colors';
 
 export interface ChartPoint {
   x: number;
@@ -152,12 +152,7 @@ export function LineChart({ title, summary, series, xAxis, yAxis, secondaryYAxis
   );
 }
 
-const axisStyle = {
-  axis: { stroke: colors.borderStrong },
-  grid: { stroke: colors.border, strokeDasharray: '2,4' },
-  tickLabels: { fontFamily: fonts.regular, fontSize: typography.caption.fontSize - 1, fill: colors.textMuted, padding: 4 },
-  axisLabel: { fontFamily: fonts.semibold, fontSize: typography.caption.fontSize, fill: colors.text, padding: 32 },
-};
+const axisStyle = chartAxisStyle;
 
 const styles = StyleSheet.create({
   wrapper: { gap: spacing.xs },

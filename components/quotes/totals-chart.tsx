@@ -4,6 +4,7 @@ import { VictoryAxis, VictoryBar, VictoryChart, VictoryLabel } from 'victory-nat
 import { colors, fonts, spacing, typography } from '../../constants/theme';
 import { Text } from '../ui/text';
 import { formatMoney } from './format';
+import { chartAxisStyle } from '../charts/chart-colors';
 
 export interface TotalsChartProps {
   currency: string;
@@ -42,11 +43,7 @@ export function TotalsChart({ currency, bars, highlightIndex, height = 240 }: To
   );
 }
 
-const axisStyle = {
-  axis: { stroke: colors.borderStrong },
-  grid: { stroke: colors.border, strokeDasharray: '2,4' },
-  tickLabels: { fontFamily: fonts.regular, fontSize: typography.caption.fontSize - 1, fill: colors.textMuted, padding: 4 },
-};
+const axisStyle = chartAxisStyle;
 
 const styles = StyleSheet.create({
   wrapper: { gap: spacing.xs },
