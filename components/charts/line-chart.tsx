@@ -94,14 +94,14 @@ export function LineChart({ title, summary, series, xAxis, yAxis, secondaryYAxis
             <VictoryAxis
               label={xAxis.label}
               tickFormat={xAxis.format ?? defaultFormat}
-              style={axisStyle}
+              style={chartAxisStyle}
               axisLabelComponent={<VictoryLabel dy={8} />}
             />
             <VictoryAxis
               dependentAxis
               label={yAxis.label}
               tickFormat={yAxis.format ?? defaultFormat}
-              style={axisStyle}
+              style={chartAxisStyle}
               axisLabelComponent={<VictoryLabel dy={-20} />}
             />
             {secondaryYAxis ? (
@@ -110,7 +110,7 @@ export function LineChart({ title, summary, series, xAxis, yAxis, secondaryYAxis
                 orientation="right"
                 label={secondaryYAxis.label}
                 tickFormat={(t: number) => (secondaryYAxis.format ?? defaultFormat)(fromPrimary(t))}
-                style={axisStyle}
+                style={chartAxisStyle}
                 axisLabelComponent={<VictoryLabel dy={10} />}
               />
             ) : null}
@@ -152,7 +152,6 @@ export function LineChart({ title, summary, series, xAxis, yAxis, secondaryYAxis
   );
 }
 
-const axisStyle = chartAxisStyle;
 
 const styles = StyleSheet.create({
   wrapper: { gap: spacing.xs },

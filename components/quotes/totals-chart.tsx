@@ -27,8 +27,8 @@ export function TotalsChart({ currency, bars, highlightIndex, height = 240 }: To
       <View onLayout={onLayout} accessible accessibilityRole="image" accessibilityLabel={`Totals by option. ${summary}`} style={[styles.plot, { height }]}>
         {width > 0 && data.length > 0 ? (
           <VictoryChart width={width} height={height} domainPadding={{ x: width / (data.length * 3) }} padding={{ top: spacing.xl, bottom: 40, left: 64, right: spacing.lg }}>
-            <VictoryAxis style={axisStyle} />
-            <VictoryAxis dependentAxis tickFormat={compact} style={axisStyle} />
+            <VictoryAxis style={chartAxisStyle} />
+            <VictoryAxis dependentAxis tickFormat={compact} style={chartAxisStyle} />
             <VictoryBar
               data={data}
               barRatio={0.7}
@@ -43,7 +43,6 @@ export function TotalsChart({ currency, bars, highlightIndex, height = 240 }: To
   );
 }
 
-const axisStyle = chartAxisStyle;
 
 const styles = StyleSheet.create({
   wrapper: { gap: spacing.xs },
