@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { type LayoutChangeEvent, StyleSheet, View } from 'react-native';
 import { VictoryAxis, VictoryChart, VictoryLabel, VictoryLine, VictoryScatter } from 'victory-native';
-import { colors, fonts, spacing, typography } from '../../constants/theme';
+import { colors, spacing } from '../../constants/theme';
 import { Text } from '../ui/text';
 import { chartAxisStyle, seriesColor } from './chart-colors';
 
