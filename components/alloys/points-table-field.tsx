@@ -7,6 +7,7 @@ import { Button } from '../ui/button';
 import { Text } from '../ui/text';
 import { NumberField } from '../ui/number-field';
 import { SourcePicker } from './source-picker';
+import { FieldError } from '../ui/field-error';
 
 export type PointTable = 'cte' | 'modulus' | 'yield';
 
@@ -42,11 +43,7 @@ export function PointsTableField({ table, control, errors, sources, onCreateSour
       <Text variant="heading" headingLevel={3}>
         {spec.title}
       </Text>
-      {tableMessage ? (
-        <Text variant="caption" tone="danger">
-          {tableMessage}
-        </Text>
-      ) : null}
+      <FieldError message={tableMessage} />
       {fields.length === 0 ? <Text tone="muted">No rows. Leave it empty where nothing is published.</Text> : null}
       {fields.map((field, i) => {
         const rowErrors = tableErrors?.[i];

@@ -9,6 +9,7 @@ import { TextField } from '../ui/text-field';
 import { sourceLabel } from './format';
 import { NewSourceForm } from './new-source-form';
 import { Tag } from '../ui/tag';
+import { FieldError } from '../ui/field-error';
 
 export interface SourcePickerProps {
   /** Visible label and accessible name, e.g. "Source of the density". */
@@ -52,11 +53,7 @@ export function SourcePicker({ label, value, sources, onChange, onCreateSource, 
           }}
         />
       </View>
-      {error ? (
-        <Text variant="caption" tone="danger">
-          {error}
-        </Text>
-      ) : null}
+      <FieldError message={error} />
       {open ? (
         <View style={styles.panel}>
           {adding ? (

@@ -17,6 +17,7 @@ import { pricedAlloys } from './live-pricing';
 import { LivePricingPanel } from './live-pricing-panel';
 import { OptionFields } from './option-fields';
 import { placeServerErrors } from '../ui/server-errors';
+import { FieldError } from '../ui/field-error';
 
 export const MIN_OPTIONS = 2;
 export const MAX_OPTIONS = 4;
@@ -158,11 +159,7 @@ export function QuoteForm({ jobs, alloys, defaultValues, submitLabel, onSubmit, 
       <Text tone="muted" variant="caption">
         Two to four options. Each sets the alloy for every run; options 2 on are compared with option 1.
       </Text>
-      {optionsError ? (
-        <Text variant="caption" tone="danger">
-          {optionsError}
-        </Text>
-      ) : null}
+      <FieldError message={optionsError} />
       {fields.map((f, i) => (
         <OptionFields
           key={f.id}

@@ -11,6 +11,7 @@ import { pressState } from '../ui/press-state';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { show } from '../units/format';
+import { FieldError } from '../ui/field-error';
 
 export interface AlloyPickerProps {
   value: string;
@@ -47,11 +48,7 @@ export function AlloyPicker({ value, currentLabel, onChange, units, error, disab
           />
         )}
       </View>
-      {error ? (
-        <Text variant="caption" tone="danger">
-          {error}
-        </Text>
-      ) : null}
+      <FieldError message={error} />
       {open && !disabled ? (
         <View style={styles.list}>
           <TextField label="Search alloys" hint="Designation or UNS number" value={search} onChangeText={setSearch} autoCorrect={false} autoCapitalize="none" />

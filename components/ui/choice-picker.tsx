@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, radii, spacing, touchTarget, typography } from '../../constants/theme';
 import { Text } from './text';
 import { pressState } from './press-state';
+import { FieldError } from './field-error';
 
 export interface Choice {
   value: string;
@@ -78,11 +79,7 @@ export function ChoicePicker({ label, choices, value, onChange, placeholder = 'C
           })}
         </View>
       ) : null}
-      {error ? (
-        <Text variant="caption" tone="danger">
-          {error}
-        </Text>
-      ) : null}
+      <FieldError message={error} />
     </View>
   );
 }

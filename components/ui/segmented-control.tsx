@@ -2,6 +2,7 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, radii, spacing, touchTarget, typography } from '../../constants/theme';
 import { Text } from './text';
 import { pressState } from './press-state';
+import { FieldError } from './field-error';
 
 export interface SegmentOption<T extends string> {
   value: T;
@@ -56,11 +57,7 @@ export function SegmentedControl<T extends string>({
           );
         })}
       </View>
-      {error ? (
-        <Text variant="caption" tone="danger">
-          {error}
-        </Text>
-      ) : null}
+      <FieldError message={error} />
     </View>
   );
 }
