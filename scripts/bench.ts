@@ -29,8 +29,8 @@ const input: RunInput = {
   segments: Array.from({ length: 10 }, (_, i) => ({ lengthMm: 80 + 10 * i, startTempC: 900 - 40 * i, endTempC: 860 - 40 * i })),
   flex: {
     parts: [
-      { id: 'a', name: 'A', boreMm: 76.2, liveLengthMm: 150, ratedAxialCompressionMm: 25, ratedAxialExtensionMm: 25, lateralOffsetMm: 6, maxTempC: 950, price: 90 },
-      { id: 'b', name: 'B', boreMm: 76.2, liveLengthMm: 100, ratedAxialCompressionMm: 10, ratedAxialExtensionMm: 10, lateralOffsetMm: 4, maxTempC: 950, price: 70 },
+      { id: 'a', name: 'A', purpose: 'thermal_bellows', boreMm: 76.2, liveLengthMm: 150, ratedAxialCompressionMm: 25, ratedAxialExtensionMm: 25, lateralOffsetMm: 6, ratedAngularDeg: 3, ratedCycles: 10000, maxTempC: 950, price: 90 },
+      { id: 'b', name: 'B', purpose: 'thermal_bellows', boreMm: 76.2, liveLengthMm: 100, ratedAxialCompressionMm: 10, ratedAxialExtensionMm: 10, lateralOffsetMm: 4, ratedAngularDeg: 3, ratedCycles: 10000, maxTempC: 950, price: 70 },
     ],
   },
 };

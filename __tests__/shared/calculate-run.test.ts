@@ -3,10 +3,25 @@ import { CAUTIONS, calculateRun } from '../../shared/engine/calculate-run';
 import { EngineInputError, isEngineInputError } from '../../shared/engine/errors';
 import { prepareStrainCurve } from '../../shared/engine/expansion';
 import { runGrowthMm } from '../../shared/engine/run-growth';
-import { tubeMassKg } from '../../shared/engine/mass';
-import type { AlloyData, RunInput, Segment } from '../../shared/engine/types';
+import type { AlloyData, FlexPart, RunInput, Segment } from '../../shared/engine/types';
 import { inToMm } from '../../shared/units';
-import { enCarbonElongation, meanCteTable, range, stainless304 } from './published';
+import { enCarbonElongation, enStainlessElongation, enStainlessElongationIntegral, meanCteTable, range, stainless304 } from './published';
+
+// A fixture part, catalogue-like, not data.
+const flexPart: FlexPart = {
+  id: 'f',
+  name: 'f',
+  purpose: 'thermal_bellows',
+  boreMm: 76.2,
+  liveLengthMm: 150,
+  ratedAxialCompressionMm: 30,
+  ratedAxialExtensionMm: 30,
+  lateralOffsetMm: 5,
+  ratedAngularDeg: 3,
+  ratedCycles: null,
+  maxTempC: 900,
+  price: 1,
+};
 
 const alloy = stainless304();
 const TOP = 1200; // top of the stainless304() expansion table
@@ -32,23 +47,25 @@ describe('calculateRun', () => {
       { lengthMm: 600, startTempC: 880, endTempC: 790 },
       { lengthMm: 400, startTempC: 790, endTempC: 650 },
     ],
-    { flex: {}, slip: { inner: { tempC: 850 }, outer: { tempC: 700 }, coldClearanceMm: 0.3, coldEngagementMm: 90, coldAxialGapMm: 25 } },
+    { flex: { parts: [flexPart] }, slip: { inner: { tempC: 850 }, outer: { tempC: 700 }, coldClearanceMm: 0.3, coldEngagementMm: 90, coldAxialGapMm: 25 } },
   );
   const r = calculateRun(input, { ...alloy, pricePerKg: 5.2 });
+  // EN 1993-1-2 Annex C integrated in closed form along each linear gradient.
+  const enGrowth = (lengthMm: number, a: number, b: number) => (lengthMm * (enStainlessElongationIntegral(b) - enStainlessElongationIntegral(a))) / (b - a);
+  const published = enGrowth(600, 880, 790) + enGrowth(400, 790, 650);
 
   it('when given a run, then the response carries the fields of the API', () => {
-    for (const key of ['growthMm', 'curve', 'growthPerMetreCurve', 'peakTempC', 'restrainedStressMPa', 'yieldAtPeakMPa', 'stressRatio', 'jointNeeded', 'limit', 'massKg', 'materialCost', 'warnings', 'flex', 'slip']) {
+    for (const key of ['growthMm', 'curve', 'growthPerMetreCurve', 'peakTempC', 'restraint', 'limit', 'massKg', 'materialCost', 'warnings', 'flex', 'slip']) {
       expect(r).toHaveProperty(key);
     }
     expect(Object.keys(r.limit)).toEqual(expect.arrayContaining(['status', 'marginC', 'continuousC', 'intermittentC']));
   });
 
-  it('when given a run, then growth, mass and cost agree with the separate calculations', () => {
-    expect(r.growthMm).toBeCloseTo(runGrowthMm(prepareStrainCurve(alloy), input.segments, 20), 10);
-    // 3.0 in × 0.065 in 304 weighs 3.0933 kg/m (reference-data §6)
+  it('when given a run, then growth and mass agree with the published law and the tube formula', () => {
+    expect(r.growthMm).toBeCloseTo(published, 3);
+    // 3.0 in × 0.065 in 304 weighs 3.0933 kg/m (reference-data §6, m = ρ·π·(OD − t)·t)
     expect(r.massKg).toBeCloseTo(3.0933, 3);
-    expect(r.massKg).toBeCloseTo(tubeMassKg(input.tube, 1000, 8000), 12);
-    expect(r.materialCost).toBeCloseTo(r.massKg * 5.2, 12);
+    expect(r.materialCost).toBeCloseTo(3.0933 * 5.2, 2);
     expect(r.peakTempC).toBe(880);
   });
 
@@ -57,9 +74,11 @@ describe('calculateRun', () => {
     expect(r.warnings.map((w) => w.code)).toEqual(expect.arrayContaining(['TEMP_OVER_LIMIT', 'CARBIDE_PRECIPITATION']));
   });
 
-  it('when flex and slip are asked, then they use the run’s growth and the run alloy', () => {
-    expect(r.flex?.requiredMovementMm).toBeCloseTo(r.growthMm * 1.25, 12);
-    expect(r.slip?.hotAxialClosureMm).toBe(r.growthMm);
+  it('when flex and slip are asked, then they take the run’s published growth and contraction to the coldest start', () => {
+    expect(r.flex?.states.find((s) => s.state === 'hot')?.axialGrowthMm).toBeCloseTo(published, 3);
+    expect(r.slip?.hotClosureMm).toBeCloseTo(published, 3);
+    // −20 °C default coldest start; below the fixture's first point (30 °C) its first mean coefficient holds.
+    expect(r.slip?.coldDrawOutMm).toBeCloseTo(1000 * (enStainlessElongation(30) / 10) * 40, 6);
     expect(r.slip?.innerDiameterMm).toBe(input.tube.odMm);
   });
 
@@ -67,8 +86,17 @@ describe('calculateRun', () => {
     const carbon: AlloyData = { ...alloy, cte: meanCteTable(enCarbonElongation, range(30, 1200, 10)) };
     const slip = { inner: { tempC: 500 }, outer: { tempC: 500, alloyId: 'carbon' }, coldClearanceMm: 0.3, coldEngagementMm: 90, coldAxialGapMm: 25 };
     const mixed = calculateRun({ ...input, slip }, alloy, { slipAlloys: { outer: carbon } });
-    expect(mixed.slip?.differentialDiametralGrowthMm).toBeGreaterThan(0);
+    // 76.2·ε_EN,stainless(500) − 76.5·ε_EN,carbon(500): the carbon sleeve grows less.
+    const want = inToMm(3) * enStainlessElongation(500) - (inToMm(3) + 0.3) * enCarbonElongation(500);
+    expect(mixed.slip?.states.find((s) => s.state === 'hot')?.differentialGrowthMm).toBeCloseTo(want, 3);
     expect(() => calculateRun({ ...input, slip }, alloy)).toThrow(EngineInputError);
+  });
+
+  it('when the shop’s design basis is given, then the joints use its share and coldest start', () => {
+    const r2 = calculateRun(input, alloy, { design: { travelShare: 0.5, coldestAmbientC: 0 } });
+    expect(r2.flex?.travelShare).toBe(0.5);
+    expect(r2.flex?.coldestAmbientC).toBe(0);
+    expect(r2.slip?.requiredGapMm).toBeCloseTo(published / 0.5, 3);
   });
 
   it('when shown, then the cautions cover hot surfaces, weld fume, fire and deferral to codes and certified data', () => {
@@ -108,6 +136,40 @@ describe('calculateRun error paths', () => {
   });
 });
 
+describe('partial data and input warnings', () => {
+  const segs = [{ lengthMm: 800, startTempC: 800, endTempC: 600 }];
+  const withJoints = { flex: { parts: [flexPart] }, slip: { inner: { tempC: 800 }, outer: { tempC: 750 }, coldClearanceMm: 0.3, coldEngagementMm: 90, coldAxialGapMm: 25 } };
+
+  it('when the alloy has no modulus or yield table, then growth, joints, limits, mass and cost still come out and only the stress says "not in the data"', () => {
+    const r = calculateRun(base(segs, withJoints), { ...alloy, modulus: [], yield: [] });
+    expect(r.growthMm).toBeCloseTo((800 * (enStainlessElongationIntegral(800) - enStainlessElongationIntegral(600))) / 200, 3);
+    expect(r.flex?.chosen).not.toBeNull();
+    expect(r.slip).toBeDefined();
+    expect(r.massKg).toBeGreaterThan(0);
+    expect(r.restraint).toMatchObject({ missing: 'modulus', verdict: 'unknown', jointNeeded: null });
+  });
+
+  it('when part of the run is colder than its install, then a warning says it shrinks', () => {
+    const r = calculateRun(base([{ lengthMm: 500, startTempC: 10, endTempC: 0 }], { installTempC: 20 }), alloy);
+    expect(r.growthMm).toBeLessThan(0);
+    expect(r.warnings.map((w) => w.code)).toContain('RUN_SHRINKS');
+    const mixed = calculateRun(base([{ lengthMm: 500, startTempC: 400, endTempC: 0 }], { installTempC: 20 }), alloy);
+    expect(mixed.warnings.map((w) => w.code)).toContain('COLDER_THAN_INSTALL');
+  });
+
+  it('when one segment ends at a temperature the next does not start at, then a warning names the step', () => {
+    const r = calculateRun(base([{ lengthMm: 500, startTempC: 800, endTempC: 700 }, { lengthMm: 500, startTempC: 600, endTempC: 500 }]), alloy);
+    const step = r.warnings.find((w) => w.code === 'TEMPERATURE_STEP');
+    expect(step?.message).toMatch(/step of 100 °C/);
+    expect(calculateRun(base([{ lengthMm: 500, startTempC: 800, endTempC: 700 }, { lengthMm: 500, startTempC: 700, endTempC: 500 }]), alloy).warnings.map((w) => w.code)).not.toContain('TEMPERATURE_STEP');
+  });
+
+  it('when the shop’s coldest start is below what the alloy data covers, then the joint field says so', () => {
+    const e = catchError(() => calculateRun(base(segs, { flex: { parts: [flexPart] } }), alloy, { design: { coldestAmbientC: -60 } }));
+    expect((e as EngineInputError).fields).toHaveProperty(['flex']);
+  });
+});
+
 describe('properties (fast-check)', () => {
   // 304 from EN Annex C: its strain rises monotonically, which the monotonicity properties assume.
   const curve = prepareStrainCurve(alloy);
@@ -128,7 +190,7 @@ describe('properties (fast-check)', () => {
         const input = base(segments, {
           installTempC: t0,
           tube: { odMm: od, wallMm: od * wallFrac },
-          flex: { parts: [{ id: 'f', name: 'f', boreMm: od, liveLengthMm: 100, ratedAxialCompressionMm: 30, ratedAxialExtensionMm: 30, lateralOffsetMm: 5, maxTempC: 900, price: 1 }] },
+          flex: { parts: [{ ...flexPart, boreMm: od }], lateralOffsetMm: 1, rotationDeg: 1 },
           slip: { inner: { tempC: segments[0].startTempC }, outer: { tempC: segments[0].endTempC }, coldClearanceMm: 0.2, coldEngagementMm: od, coldAxialGapMm: 20 },
         });
         return allFinite(calculateRun(input, alloy));

@@ -1,5 +1,5 @@
 import { prepareStrainCurve } from '../../shared/engine/expansion';
-import { prepareStrengthTables, restraint } from '../../shared/engine/restraint';
+import { CLEAR_STRESS_NOTE, CLEAR_STRESS_RATIO, prepareStrengthTables, restraint } from '../../shared/engine/restraint';
 import type { AlloyData, Segment } from '../../shared/engine/types';
 import { alloyWith, constantAlphaAlloy, enCarbonElongation, meanCteTable, range, stainless304 } from './published';
 
@@ -17,23 +17,24 @@ describe('clamped bar, σ = E·α·ΔT (textbook worked examples, reference-data
     ['example 4: rod between rigid walls 27 → 57 °C, α 11.25e-6, E 200 GPa', 11.25e-6, 200, 27, 57, 67.5],
   ])('when %s, then the restrained stress is the published value', (_src, alpha, gpa, t0, t, want) => {
     const alloy = constantAlphaAlloy(alpha, { modulus: [{ tempC: 0, gpa }], yield: [{ tempC: 0, mpa: 1e6 }] });
-    expect(run(alloy, uniform(t), t0).restrainedStressMPa).toBeCloseTo(want, 8);
+    expect(run(alloy, uniform(t), t0).peakStressMPa).toBeCloseTo(want, 8);
   });
 });
 
 describe('temperature-dependent data', () => {
   it('when 304 is fully restrained 20 → 100 °C, then σ = 193 000 × 1.317e-3 ≈ 254 MPa (reference-data §5, derived) and exceeds yield there', () => {
     const r = run(stainless304(), uniform(100), 20);
-    expect(r.restrainedStressMPa).toBeCloseTo(254.2, 0);
+    expect(r.peakStressMPa).toBeCloseTo(254.2, 0);
     // 205 MPa × k_0.2p,100 °C = 0.82 (EN 1993-1-2 Annex C, 1.4301)
-    expect(r.yieldAtPeakMPa).toBeCloseTo(205 * 0.82, 10);
-    expect(r.stressRatio).toBeCloseTo(254.2 / (205 * 0.82), 2);
+    expect(r.governing?.yieldMPa).toBeCloseTo(205 * 0.82, 10);
+    expect(r.governing?.ratio).toBeCloseTo(254.2 / (205 * 0.82), 2);
+    expect(r.verdict).toBe('yields');
     expect(r.jointNeeded).toBe(true);
   });
 
   it('when carbon steel with E = 210 GPa is fully restrained 20 → 100 °C on EN strain, then σ = 209.7 MPa (reference-data §5, derived)', () => {
     const alloy = alloyWith({ cte: meanCteTable(enCarbonElongation, range(30, 700, 10)), modulus: [{ tempC: 20, gpa: 210 }] });
-    expect(run(alloy, uniform(100), 20).restrainedStressMPa).toBeCloseTo(209.7, 1);
+    expect(run(alloy, uniform(100), 20).peakStressMPa).toBeCloseTo(209.7, 1);
   });
 
   it('when the modulus falls with temperature (ASME II-D TM-1 carbon steel, 151 GPa at 500 °C), then the stress at 500 °C uses E at 500 °C', () => {
@@ -45,16 +46,17 @@ describe('temperature-dependent data', () => {
       yield: [{ tempC: 20, mpa: 1e6 }, { tempC: 700, mpa: 1e6 }],
     });
     const r = run(alloy, uniform(500), 20);
-    expect(r.restrainedStressMPa).toBeCloseTo(151_000 * enCarbonElongation(500), 1);
-    expect(r.stressPeakTempC).toBe(500);
+    expect(r.peakStressMPa).toBeCloseTo(151_000 * enCarbonElongation(500), 1);
+    expect(r.peakTempC).toBe(500);
   });
 
   it('when the stress is small against yield, then no joint is needed', () => {
     // Example 3's 52 MPa against the 304 yield table of the fixture (ASTM minimum × EN Annex C factors).
     const alloy = constantAlphaAlloy(13e-6, { modulus: [{ tempC: 0, gpa: 200 }], yield: stainless304().yield });
     const r = run(alloy, uniform(30), 10);
-    expect(r.yieldAtPeakMPa).toBeGreaterThan(200);
-    expect(r.stressRatio).toBeCloseTo(52 / (r.yieldAtPeakMPa as number), 10);
+    expect(r.governing?.yieldMPa).toBeGreaterThan(200);
+    expect(r.governing?.ratio).toBeCloseTo(52 / (r.governing?.yieldMPa as number), 10);
+    expect(r.verdict).toBe('clear');
     expect(r.jointNeeded).toBe(false);
   });
 
@@ -65,10 +67,9 @@ describe('temperature-dependent data', () => {
       yield: [{ tempC: 20, mpa: 500 }, { tempC: 600, mpa: 50 }],
     });
     const r = run(alloy, [{ lengthMm: 1000, startTempC: 600, endTempC: 20 }], 20);
-    expect(r.worstStressRatio).not.toBeNull();
-    expect(r.worstStressRatio as number).toBeGreaterThan(r.stressRatio as number);
-    expect(r.worstStressTempC).toBe(600);
-    expect(r.stressPeakTempC).toBeLessThan(600);
+    expect(r.governing?.tempC).toBe(600);
+    expect(r.peakTempC).toBeLessThan(600);
+    expect(r.governing?.stressMPa as number).toBeLessThan(r.peakStressMPa as number);
     expect(r.jointNeeded).toBe(true);
   });
 });
@@ -78,14 +79,14 @@ describe('tables that stop short of the run', () => {
     const r = run(stainless304(), uniform(800), 20);
     // 800 °C: Δl/l = 14.8484e-3 (EN Annex C, reference-data §0 item 2)
     expect(r.warnings.map((w) => w.code)).toContain('MODULUS_DATA_RANGE');
-    expect(r.restrainedStressMPa).toBeCloseTo(193_000 * 14.8484e-3, 0);
+    expect(r.peakStressMPa).toBeCloseTo(193_000 * 14.8484e-3, 0);
   });
 
-  it('when the yield table stops below the peak, then yield and ratio there are null and the verdict rests on the last tabulated yield', () => {
+  it('when the yield table stops below the whole run, then no ratio is claimed and the verdict rests on the last tabulated yield', () => {
     const r = run({ ...stainless304(), yield: stainless304().yield.filter((y) => y.tempC <= 500) }, uniform(800), 20);
-    expect(r.yieldAtPeakMPa).toBeNull();
-    expect(r.stressRatio).toBeNull();
+    expect(r.governing).toBeNull();
     expect(r.warnings.map((w) => w.code)).toContain('YIELD_DATA_RANGE');
+    expect(r.verdict).toBe('yields');
     expect(r.jointNeeded).toBe(true);
   });
 
@@ -93,7 +94,55 @@ describe('tables that stop short of the run', () => {
     // Synthetic: a coefficient of 1e-6/K keeps the stress low.
     const alloy = constantAlphaAlloy(1e-6, { modulus: [{ tempC: 20, gpa: 200 }], yield: [{ tempC: 20, mpa: 205 }] });
     const r = run(alloy, uniform(300), 20);
-    expect(r.restrainedStressMPa).toBeLessThan(205);
+    expect(r.peakStressMPa).toBeLessThan(205 * CLEAR_STRESS_RATIO);
+    expect(r.verdict).toBe('unknown');
     expect(r.jointNeeded).toBeNull();
+  });
+});
+
+describe('the verdict keeps a stated margin on yield', () => {
+  // Example 4 (reference-data §5): rod between rigid walls 27 → 57 °C, α 11.25e-6, E 200 GPa → 67.5 MPa.
+  const example4 = (yieldMPa: number) =>
+    run(constantAlphaAlloy(11.25e-6, { modulus: [{ tempC: 0, gpa: 200 }], yield: [{ tempC: 0, mpa: yieldMPa }, { tempC: 100, mpa: yieldMPa }] }), uniform(57), 27);
+
+  it('when the stress is 75 % of yield, then it is marginal and a joint is needed, not "below yield"', () => {
+    const r = example4(90);
+    expect(r.governing?.ratio).toBeCloseTo(67.5 / 90, 8);
+    expect(r.verdict).toBe('marginal');
+    expect(r.jointNeeded).toBe(true);
+  });
+
+  it('when the stress is 99 % of yield, then it is still not clear', () => {
+    expect(example4(67.5 / 0.99).verdict).toBe('marginal');
+    expect(example4(67.4).verdict).toBe('yields');
+  });
+
+  it('when the stress is under two thirds of yield, then it is clear, and the margin is labelled common practice', () => {
+    const r = example4(110);
+    expect(r.verdict).toBe('clear');
+    expect(r.clearRatio).toBeCloseTo(2 / 3, 12);
+    expect(CLEAR_STRESS_NOTE).toMatch(/common practice, no published source/);
+  });
+});
+
+describe('partial data', () => {
+  it('when the alloy has no modulus table, then the stress is not in the data and the verdict is unknown', () => {
+    const r = run({ ...stainless304(), modulus: [] }, uniform(600), 20);
+    expect(r).toMatchObject({ missing: 'modulus', peakStressMPa: null, governing: null, verdict: 'unknown', jointNeeded: null });
+  });
+
+  it('when the alloy has a modulus but no yield table, then the stress is given and the ratio is not', () => {
+    const r = run({ ...stainless304(), yield: [] }, uniform(100), 20);
+    expect(r.missing).toBe('yield');
+    expect(r.peakStressMPa).toBeCloseTo(254.2, 0);
+    expect(r.governing).toBeNull();
+    expect(r.verdict).toBe('unknown');
+  });
+
+  it('when the alloy names where its tables come from, then the result carries the basis', () => {
+    const alloy = { ...stainless304(), modulusBasis: 'ASME BPVC II-D Table TM-1', yieldBasis: 'ASME BPVC II-D Table Y-1' };
+    const r = restraint(prepareStrainCurve(alloy), prepareStrengthTables(alloy), uniform(100), 20, alloy);
+    expect(r.modulusBasis).toBe('ASME BPVC II-D Table TM-1');
+    expect(r.yieldBasis).toBe('ASME BPVC II-D Table Y-1');
   });
 });

@@ -1,13 +1,16 @@
 import { CAUTIONS } from './cautions';
 import { EngineInputError } from './errors';
-import { prepareStrainCurve, type StrainCurve } from './expansion';
+import { prepareStrainCurve, type StrainCurve, strainChange } from './expansion';
+import { designBasis } from './design-basis';
 import { sizeFlex } from './flex';
+import { flexDuty } from './flex-duty';
+import { inputWarnings } from './input-warnings';
 import { peakTempC, limitWarnings, temperatureLimit, warningRangesHit } from './limits';
 import { materialCost, tubeMassKg } from './mass';
 import { prepareStrengthTables, restraint, type StrengthTables } from './restraint';
 import { growthPerMetreCurve, runGrowthCurve, totalLengthMm } from './run-growth';
-import { sizeSlip } from './slip';
-import type { AlloyData, FlexPart, RunInput, RunResult, SlipMemberInput } from './types';
+import { sizeSlip, slipTolerance } from './slip';
+import type { AlloyData, DesignBasis, FlexPart, RunInput, RunResult, SlipMemberInput } from './types';
 
 export { CAUTIONS };
 
@@ -16,6 +19,8 @@ export interface CalculateRunOptions {
   flexParts?: FlexPart[];
   /** Alloys the caller resolved from slip.inner.alloyId / slip.outer.alloyId. */
   slipAlloys?: { inner?: AlloyData; outer?: AlloyData };
+  /** The shop's travel share and coldest start; defaults from DEFAULT_DESIGN_BASIS. */
+  design?: Partial<DesignBasis>;
 }
 
 function prepare<T>(field: string, make: () => T): T {
@@ -50,12 +55,12 @@ function checkInput(input: RunInput, c: StrainCurve): void {
     put(`segments.${i}.startTempC`, rangeMessage(c, s.startTempC));
     put(`segments.${i}.endTempC`, rangeMessage(c, s.endTempC));
   });
-  const margin = input.flex?.movementMargin;
-  if (margin !== undefined && !(margin >= 1)) put('flex.movementMargin', 'Margin must be at least 1');
   const atMm = input.flex?.atMm;
   if (atMm !== undefined && !(atMm >= 0 && atMm <= totalLengthMm(input.segments))) {
     put('flex.atMm', 'Position must lie within the run');
   }
+  const leg = input.flex?.perpendicularLeg;
+  if (leg) put('flex.perpendicularLeg.tempC', rangeMessage(c, leg.tempC));
   if (Object.keys(fields).length > 0) throw new EngineInputError(fields);
 }
 
@@ -81,16 +86,22 @@ function slipCurve(
   return c;
 }
 
+function checkColdest(c: StrainCurve, coldestC: number, field: string): void {
+  const message = rangeMessage(c, coldestC);
+  if (message) throw new EngineInputError({ [field]: `The shop's coldest start (${coldestC} °C): ${message}` });
+}
+
 /** The whole calculation for one run. Throws EngineInputError with request paths for inputs the alloy's data cannot answer. */
 export function calculateRun(input: RunInput, alloy: AlloyData, opts: CalculateRunOptions = {}): RunResult {
   const curve = prepare('alloy.cte', () => prepareStrainCurve(alloy));
   checkInput(input, curve);
   const strength: StrengthTables = prepare('alloy', () => prepareStrengthTables(alloy));
   const { segments, installTempC, tube } = input;
+  const design = designBasis(opts.design);
 
   const growth = runGrowthCurve(curve, segments, installTempC);
   const peakC = peakTempC(segments);
-  const stress = restraint(curve, strength, segments, installTempC);
+  const stress = restraint(curve, strength, segments, installTempC, alloy);
   const limit = temperatureLimit(alloy, peakC);
   const lengthMm = totalLengthMm(segments);
   const massKg = tubeMassKg(tube, lengthMm, alloy.densityKgM3);
@@ -101,26 +112,35 @@ export function calculateRun(input: RunInput, alloy: AlloyData, opts: CalculateR
     growthPerMetreCurve: growthPerMetreCurve(curve, installTempC),
     totalLengthMm: lengthMm,
     peakTempC: peakC,
-    restrainedStressMPa: stress.restrainedStressMPa,
-    stressPeakTempC: stress.stressPeakTempC,
-    yieldAtPeakMPa: stress.yieldAtPeakMPa,
-    stressRatio: stress.stressRatio,
-    worstStressRatio: stress.worstStressRatio,
-    jointNeeded: stress.jointNeeded,
+    restraint: stress,
     limit,
     massKg,
     materialCost: materialCost(massKg, alloy.pricePerKg),
-    warnings: [...limitWarnings(limit, peakC), ...warningRangesHit(alloy, segments), ...stress.warnings],
+    warnings: [
+      ...inputWarnings(segments, installTempC, growth.growthMm),
+      ...limitWarnings(limit, peakC),
+      ...warningRangesHit(alloy, segments),
+      ...stress.warnings,
+    ],
   };
 
+  if (input.flex || input.slip) checkColdest(curve, design.coldestAmbientC, input.flex ? 'flex' : 'slip');
   if (input.flex) {
-    result.flex = sizeFlex(growth.growthMm, tube.odMm, segments, peakC, input.flex, opts.flexParts);
+    const duty = flexDuty({ curve, segments, installTempC, hotGrowthMm: growth.growthMm, peakC, odMm: tube.odMm, options: input.flex, design });
+    result.flex = sizeFlex(duty, input.flex.parts ?? opts.flexParts ?? [], input.flex.partId);
+    if (result.flex.chosen) result.warnings.push(...result.flex.chosen.warnings);
   }
   if (input.slip) {
     const slip = input.slip;
     const inner = slipCurve('inner', slip.inner, curve, installTempC, opts.slipAlloys?.inner);
     const outer = slipCurve('outer', slip.outer, curve, installTempC, opts.slipAlloys?.outer);
-    result.slip = sizeSlip(slip, { inner, outer }, growth.growthMm, tube.odMm, installTempC);
+    checkColdest(inner, design.coldestAmbientC, 'slip.inner.alloyId');
+    checkColdest(outer, design.coldestAmbientC, 'slip.outer.alloyId');
+    const spigotOd = slip.inner.diameterMm ?? tube.odMm;
+    const tolerance = slipTolerance(slip, spigotOd);
+    if (tolerance === null) throw new EngineInputError({ 'slip.toleranceMm': 'Enter the tolerance: the tube standard’s table stops at 14 in OD' });
+    const coldGrowthMm = lengthMm * strainChange(curve, design.coldestAmbientC, installTempC);
+    result.slip = sizeSlip(slip, { inner, outer }, { hotGrowthMm: growth.growthMm, coldGrowthMm, installTempC, design }, tube.odMm, tolerance);
   }
   return result;
 }

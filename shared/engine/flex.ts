@@ -1,9 +1,6 @@
-import { tempAtMm } from './run-growth';
-import type { FlexCandidateResult, FlexOptions, FlexPart, FlexResult, Segment } from './types';
-
-/** Factor on the computed growth when sizing a flex. Common practice, no published source. */
-export const DEFAULT_MOVEMENT_MARGIN = 1.25;
-export const MOVEMENT_MARGIN_NOTE = 'Common practice, no published source';
+import { angularEquivalentMm, EJMA_RELATION_NOTE, ESTIMATED_MEAN_DIAMETER_FACTOR, lateralEquivalentMm } from './ejma';
+import { TRAVEL_SHARE_NOTE } from './design-basis';
+import type { EngineWarning, FlexCandidateResult, FlexPart, FlexResult, FlexState, FlexStateUse } from './types';
 
 /**
  * A flex part's bore fits the tube when it is within this many mm of the tube OD either way.
@@ -12,73 +9,180 @@ export const MOVEMENT_MARGIN_NOTE = 'Common practice, no published source';
  */
 export const FLEX_BORE_FIT_TOLERANCE_MM = 1.0;
 
-function fmt(x: number): string {
-  return (Math.round(x * 100) / 100).toString();
+export const PURPOSE_LABELS: Record<FlexPart['purpose'], string> = {
+  thermal_bellows: 'thermal bellows',
+  vibration_decoupler: 'vibration decoupler',
+  braided_hose: 'braided hose',
+};
+
+/** What the part must take: the run's movement at each state and where the part sits. */
+export interface FlexDuty {
+  states: FlexState[];
+  odMm: number;
+  tempAtFlexC: number;
+  heatCycles: number | null;
+  travelShare: number;
 }
 
-/**
- * Pre-set: the ideal is to install the part stretched by the computed growth, so that it sits
- * at neutral when hot (hot, it is weakest and creeps; cold, it carries the deflection when
- * strongest). If its extension rating is smaller, it is stretched as far as that allows.
- * Envelope check: from the cold position P the part moves by growth × margin; both the cold
- * position and that worst hot position must stay within [−rated compression, +rated extension].
- */
-export function assessFlexPart(part: FlexPart, growthMm: number, margin: number, odMm: number, tempC: number): FlexCandidateResult {
-  const reasons: string[] = [];
-  const compression = part.ratedAxialCompressionMm;
-  const extension = part.ratedAxialExtensionMm;
-  const preset = Math.min(Math.max(growthMm, -compression), extension);
-  const worst = preset - growthMm * margin;
-  if (Math.abs(part.boreMm - odMm) > FLEX_BORE_FIT_TOLERANCE_MM) {
-    reasons.push(`Bore ${fmt(part.boreMm)} mm does not fit a ${fmt(odMm)} mm tube (±${FLEX_BORE_FIT_TOLERANCE_MM} mm)`);
-  }
-  if (part.maxTempC < tempC) {
-    reasons.push(`Rated to ${fmt(part.maxTempC)} °C, below the ${fmt(tempC)} °C where it sits`);
-  }
-  if (worst < -compression || worst > extension) {
-    reasons.push(
-      `Needs ${fmt(Math.abs(growthMm * margin))} mm of travel; rated ${fmt(compression)} mm compression + ${fmt(extension)} mm extension is not enough with this pre-set`,
-    );
-  }
+const fmt = (x: number) => (Math.round(x * 100) / 100).toString();
+const pct = (x: number) => `${Math.round(x * 100)} %`;
+/** Uses past this many times a rating are reported as this: the part is far out of range either way, and the figure stays finite. */
+export const USE_CAP = 10;
+const shareOf = (demand: number, rating: number) => (demand <= 1e-12 ? 0 : rating > 0 ? Math.min(demand / rating, USE_CAP) : USE_CAP);
+
+function meanDiameter(part: FlexPart): { mm: number; estimated: boolean } {
+  return part.meanDiameterMm ? { mm: part.meanDiameterMm, estimated: false } : { mm: part.boreMm * ESTIMATED_MEAN_DIAMETER_FACTOR, estimated: true };
+}
+
+/** Lateral and angular movement of a state as equivalent axial movement at axial position p. */
+function equivalentAt(part: FlexPart, dm: number, s: FlexState, positionMm: number): number {
+  return lateralEquivalentMm(dm, part.liveLengthMm, s.lateralMm, positionMm) + angularEquivalentMm(dm, s.rotationDeg);
+}
+
+function stateUse(part: FlexPart, dm: number, s: FlexState, presetMm: number): FlexStateUse {
+  const positionMm = presetMm - s.axialGrowthMm;
+  const equivalentMm = equivalentAt(part, dm, s, positionMm);
   return {
-    id: part.id,
-    name: part.name,
-    fits: reasons.length === 0,
-    reasons,
-    presetMm: preset,
-    hotPositionMm: preset - growthMm,
+    state: s.state,
+    positionMm,
+    equivalentMm,
+    compressionUse: shareOf(-positionMm + equivalentMm, part.ratedAxialCompressionMm),
+    extensionUse: shareOf(positionMm + equivalentMm, part.ratedAxialExtensionMm),
   };
 }
 
-export function sizeFlex(
-  growthMm: number,
-  odMm: number,
-  segments: Segment[],
-  peakC: number,
-  options: FlexOptions,
-  catalogue: FlexPart[] = [],
-): FlexResult {
-  const margin = options.movementMargin ?? DEFAULT_MOVEMENT_MARGIN;
-  const parts = options.parts ?? catalogue;
-  const atLocation = options.atMm !== undefined;
-  const tempC = atLocation ? tempAtMm(segments, options.atMm as number) : peakC;
-  const assessed = parts.map((p) => ({ part: p, result: assessFlexPart(p, growthMm, margin, odMm, tempC) }));
-  const fitting = assessed
-    .filter((a) => a.result.fits)
-    .sort((a, b) => a.part.liveLengthMm - b.part.liveLengthMm || a.part.price - b.part.price || a.part.id.localeCompare(b.part.id));
-  const best = fitting[0];
-  const noneFitsReason =
-    !best && parts.length > 0 ? `None of the ${parts.length} flex part(s) fits: see each part's reasons` : null;
+/**
+ * Pre-set range: at every state the compression demand (−p + X_eq) and the extension demand
+ * (p + X_eq), with p = P − growth, must stay within the share of the rated compression and
+ * extension. X_eq is taken at the shortest the part gets, which overstates it slightly; the
+ * chosen pre-set is then checked exactly.
+ */
+function presetRange(part: FlexPart, dm: number, duty: FlexDuty): { lo: number; hi: number } {
+  const c = duty.travelShare * part.ratedAxialCompressionMm;
+  const e = duty.travelShare * part.ratedAxialExtensionMm;
+  let lo = -Infinity;
+  let hi = Infinity;
+  for (const s of duty.states) {
+    // Within its share the part is never shorter than L_b − c.
+    const eq = equivalentAt(part, dm, s, -c);
+    lo = Math.max(lo, s.axialGrowthMm + eq - c);
+    hi = Math.min(hi, s.axialGrowthMm - eq + e);
+  }
+  return { lo, hi };
+}
+
+/**
+ * The one pre-set of the part: hot at neutral where its share of travel allows (hot, a bellows
+ * is weakest and creeps; cold, it carries the deflection when strongest), otherwise as near to
+ * it as the range allows; to 0.1 mm, rounded into the range.
+ */
+export function choosePreset(hotGrowthMm: number, range: { lo: number; hi: number }): number | null {
+  if (!(range.lo <= range.hi + 1e-9)) return null;
+  const ideal = Math.min(Math.max(hotGrowthMm, range.lo), range.hi);
+  const rounded = Math.round(ideal * 10) / 10;
+  if (rounded >= range.lo - 1e-9 && rounded <= range.hi + 1e-9) return rounded;
+  return rounded < range.lo ? Math.ceil(range.lo * 10) / 10 : Math.floor(range.hi * 10) / 10;
+}
+
+export function assessFlexPart(part: FlexPart, duty: FlexDuty): FlexCandidateResult {
+  const reasons: string[] = [];
+  const warnings: EngineWarning[] = [];
+  const share = duty.travelShare;
+  const dm = meanDiameter(part);
+  if (Math.abs(part.boreMm - duty.odMm) > FLEX_BORE_FIT_TOLERANCE_MM) {
+    reasons.push(`Bore ${fmt(part.boreMm)} mm does not fit a ${fmt(duty.odMm)} mm tube (±${FLEX_BORE_FIT_TOLERANCE_MM} mm)`);
+  }
+  if (part.maxTempC < duty.tempAtFlexC) {
+    reasons.push(`Rated to ${fmt(part.maxTempC)} °C, below the ${fmt(duty.tempAtFlexC)} °C where it sits`);
+  }
+  const hot = duty.states.find((s) => s.state === 'hot') ?? duty.states[0];
+  const lateral = Math.max(...duty.states.map((s) => s.lateralMm));
+  const rotation = Math.max(...duty.states.map((s) => s.rotationDeg));
+  const lateralUse = shareOf(lateral, part.lateralOffsetMm);
+  const angularUse = shareOf(rotation, part.ratedAngularDeg);
+  if (lateralUse > share) reasons.push(`Lateral offset ${fmt(lateral)} mm is ${pct(lateralUse)} of its ${fmt(part.lateralOffsetMm)} mm rating (at most ${pct(share)})`);
+  if (angularUse > share) reasons.push(`Rotation ${fmt(rotation)}° is ${pct(angularUse)} of its ${fmt(part.ratedAngularDeg)}° rating (at most ${pct(share)})`);
+
+  const preset = choosePreset(hot.axialGrowthMm, presetRange(part, dm.mm, duty));
+  const uses = duty.states.map((s) => stateUse(part, dm.mm, s, preset ?? 0));
+  if (preset === null) {
+    const range = Math.max(...duty.states.map((s) => s.axialGrowthMm)) - Math.min(...duty.states.map((s) => s.axialGrowthMm));
+    reasons.push(
+      `Needs ${fmt(range)} mm of axial travel from the coldest start to hot, plus the lateral and angular equivalent; ${pct(share)} of its ${fmt(part.ratedAxialCompressionMm)} mm compression and ${fmt(part.ratedAxialExtensionMm)} mm extension is not enough at any pre-set`,
+    );
+  } else {
+    for (const u of uses) {
+      if (u.compressionUse > share + 1e-9 || u.extensionUse > share + 1e-9) {
+        reasons.push(`At the ${u.state} state it would use ${pct(Math.max(u.compressionUse, u.extensionUse))} of its rated travel (at most ${pct(share)})`);
+      }
+    }
+  }
+  if (part.purpose !== 'thermal_bellows') {
+    warnings.push({
+      code: 'FLEX_NOT_FOR_GROWTH',
+      message: `${part.name} is a ${PURPOSE_LABELS[part.purpose]}, not meant to take thermal growth: use a thermal bellows for the growth`,
+    });
+  }
+  if (duty.heatCycles !== null) {
+    if (part.ratedCycles === null) {
+      warnings.push({ code: 'FLEX_CYCLES_NOT_RATED', message: `${part.name} has no cycle rating: ask its maker whether it is rated for ${duty.heatCycles} heat cycles` });
+    } else if (duty.heatCycles > part.ratedCycles) {
+      warnings.push({
+        code: 'FLEX_CYCLES_OVER_RATING',
+        message: `${duty.heatCycles} heat cycles exceed the ${part.ratedCycles} cycles ${part.name} is rated for: expect fatigue cracks; choose a part rated for the cycles`,
+      });
+    }
+  }
+  const worstUse = Math.max(lateralUse, angularUse, ...uses.flatMap((u) => [u.compressionUse, u.extensionUse]));
   return {
-    movementMargin: margin,
-    movementMarginNote: MOVEMENT_MARGIN_NOTE,
-    growthMm,
-    requiredMovementMm: Math.abs(growthMm) * margin,
-    presetMm: growthMm,
-    tempAtFlexC: tempC,
-    tempBasis: atLocation ? 'location' : 'peak',
+    id: part.id,
+    name: part.name,
+    purpose: part.purpose,
+    fits: reasons.length === 0,
+    reasons,
+    presetMm: preset,
+    meanDiameterMm: dm.mm,
+    meanDiameterEstimated: dm.estimated,
+    uses,
+    lateralUse,
+    angularUse,
+    worstUse,
+    warnings,
+  };
+}
+
+/** Thermal bellows first, then the most compact, then the cheapest. */
+function preference(a: FlexPart, b: FlexPart): number {
+  const growthPart = (p: FlexPart) => (p.purpose === 'thermal_bellows' ? 0 : 1);
+  return growthPart(a) - growthPart(b) || a.liveLengthMm - b.liveLengthMm || a.price - b.price || a.id.localeCompare(b.id);
+}
+
+export function sizeFlex(duty: FlexDuty & { coldestAmbientC: number; tempBasis: 'location' | 'peak' }, parts: FlexPart[], partId?: string): FlexResult {
+  const assessed = parts.map((p) => ({ part: p, result: assessFlexPart(p, duty) }));
+  let chosen: (typeof assessed)[number] | undefined;
+  let noneFitsReason: string | null = null;
+  if (partId !== undefined) {
+    chosen = assessed.find((a) => a.part.id === partId);
+    if (!chosen) noneFitsReason = 'The flex part picked for this run is no longer in the catalogue: pick another';
+    else if (!chosen.result.fits) noneFitsReason = `${chosen.part.name} does not fit: ${chosen.result.reasons.join('; ')}`;
+  } else {
+    chosen = assessed.filter((a) => a.result.fits).sort((a, b) => preference(a.part, b.part))[0];
+    if (!chosen) noneFitsReason = parts.length > 0 ? `None of the ${parts.length} flex part(s) fits: see each part's reasons` : 'There are no flex parts in the catalogue';
+  }
+  const growths = duty.states.map((s) => s.axialGrowthMm);
+  return {
+    travelShare: duty.travelShare,
+    travelShareNote: TRAVEL_SHARE_NOTE,
+    coldestAmbientC: duty.coldestAmbientC,
+    relationNote: EJMA_RELATION_NOTE,
+    states: duty.states,
+    axialRangeMm: Math.max(...growths) - Math.min(...growths),
+    tempAtFlexC: duty.tempAtFlexC,
+    tempBasis: duty.tempBasis,
+    heatCycles: duty.heatCycles,
     boreFitToleranceMm: FLEX_BORE_FIT_TOLERANCE_MM,
-    chosen: best ? { ...best.result, part: best.part } : null,
+    chosen: chosen ? { ...chosen.result, part: chosen.part } : null,
+    chosenBy: chosen ? (partId !== undefined ? 'fabricator' : 'engine') : null,
     candidates: assessed.map((a) => a.result),
     noneFitsReason,
   };

@@ -1,34 +1,39 @@
 import { EngineInputError } from './errors';
 import { type StrainCurve, strainAt } from './expansion';
 import { interpolateOrNull, type Point, sortedPoints } from './tables';
-import type { AlloyData, EngineWarning, RestraintResult, Segment } from './types';
+import type { AlloyData, EngineWarning, RestraintResult, RestraintVerdict, Segment } from './types';
 
-/** Local stress/yield ratio at or above which the run cannot be left rigidly held: it would yield. */
-export const JOINT_NEEDED_STRESS_RATIO = 1;
+/**
+ * The run may be left rigidly held only while the restrained stress stays at or below this
+ * share of yield (a factor of 1.5 on yield). Common practice, no published source.
+ */
+export const CLEAR_STRESS_RATIO = 2 / 3;
+export const CLEAR_STRESS_NOTE = 'A rigidly held run passes only at or below two thirds of yield (a factor of 1.5): common practice, no published source';
 const SUBDIVISIONS = 8;
 
+/** Each table sorted, or null where the alloy has none (the stress check then says it is not in the data). */
 export interface StrengthTables {
-  modulus: Point[]; // GPa
-  yield: Point[]; // MPa
+  modulus: Point[] | null; // GPa
+  yield: Point[] | null; // MPa
 }
 
 /** Both tables sorted; values must be positive (a table that falls to zero should stop at its last positive point). */
 export function prepareStrengthTables(alloy: Pick<AlloyData, 'modulus' | 'yield'>): StrengthTables {
-  const modulus = sortedPoints(alloy.modulus.map((p) => ({ t: p.tempC, v: p.gpa })), 'modulus');
-  const yieldPts = sortedPoints(alloy.yield.map((p) => ({ t: p.tempC, v: p.mpa })), 'yield');
-  if (modulus.some((p) => p.v <= 0)) throw new EngineInputError({ 'alloy.modulus': 'Modulus values must be above 0' });
-  if (yieldPts.some((p) => p.v <= 0)) throw new EngineInputError({ 'alloy.yield': 'Yield values must be above 0' });
+  const modulus = alloy.modulus.length ? sortedPoints(alloy.modulus.map((p) => ({ t: p.tempC, v: p.gpa })), 'modulus') : null;
+  const yieldPts = alloy.yield.length ? sortedPoints(alloy.yield.map((p) => ({ t: p.tempC, v: p.mpa })), 'yield') : null;
+  if (modulus?.some((p) => p.v <= 0)) throw new EngineInputError({ 'alloy.modulus': 'Modulus values must be above 0' });
+  if (yieldPts?.some((p) => p.v <= 0)) throw new EngineInputError({ 'alloy.yield': 'Yield values must be above 0' });
   return { modulus, yield: yieldPts };
 }
 
 /** E(T) in GPa; above the table the last value is held (see restraint()). */
-function modulusAt(s: StrengthTables, tempC: number): number {
-  return interpolateOrNull(s.modulus, tempC) ?? s.modulus[s.modulus.length - 1].v;
+function modulusAt(modulus: Point[], tempC: number): number {
+  return interpolateOrNull(modulus, tempC) ?? modulus[modulus.length - 1].v;
 }
 
 /** Fully restrained thermal stress σ = E(T)·(ε(T) − ε(T0)) in MPa (positive = compression). */
-export function restrainedStressMPa(c: StrainCurve, s: StrengthTables, tempC: number, installTempC: number): number {
-  return modulusAt(s, tempC) * 1000 * (strainAt(c, tempC) - strainAt(c, installTempC));
+export function restrainedStressMPa(c: StrainCurve, modulus: Point[], tempC: number, installTempC: number): number {
+  return modulusAt(modulus, tempC) * 1000 * (strainAt(c, tempC) - strainAt(c, installTempC));
 }
 
 /** Temperatures to sample: every segment's range, split at every table point inside it. */
@@ -40,7 +45,7 @@ function sampleTemps(c: StrainCurve, s: StrengthTables, segments: Segment[]): nu
     breaks.add(g.startTempC);
     breaks.add(g.endTempC);
   }
-  for (const p of [...c.knots, ...s.modulus, ...s.yield]) if (p.t > lo && p.t < hi) breaks.add(p.t);
+  for (const p of [...c.knots, ...(s.modulus ?? []), ...(s.yield ?? [])]) if (p.t > lo && p.t < hi) breaks.add(p.t);
   const sorted = [...breaks].sort((a, b) => a - b);
   const covered = (t: number) =>
     segments.some((g) => t >= Math.min(g.startTempC, g.endTempC) && t <= Math.max(g.startTempC, g.endTempC));
@@ -57,70 +62,96 @@ function sampleTemps(c: StrainCurve, s: StrengthTables, segments: Segment[]): nu
   return temps;
 }
 
+export interface StrengthBases {
+  modulusBasis?: string | null;
+  yieldBasis?: string | null;
+}
+
+function notInData(missing: 'modulus' | 'yield', bases: StrengthBases, rest: Partial<RestraintResult> = {}): RestraintResult {
+  return {
+    missing,
+    peakStressMPa: null,
+    peakTempC: null,
+    governing: null,
+    verdict: 'unknown',
+    clearRatio: CLEAR_STRESS_RATIO,
+    clearRatioNote: CLEAR_STRESS_NOTE,
+    modulusBasis: bases.modulusBasis ?? null,
+    yieldBasis: bases.yieldBasis ?? null,
+    jointNeeded: null,
+    warnings: [],
+    ...rest,
+  };
+}
+
 /**
- * The run held rigidly at both ends, judged element by element (an upper bound: it ignores
- * that a straight run shares one axial force). Below a table's first point its first value
- * holds.
+ * The run held rigidly at both ends with nothing giving, judged element by element (an upper
+ * bound: it ignores that a straight run shares one axial force). Below a table's first point
+ * its first value holds.
  *
  * Beyond the tables' top:
  * - modulus: the last value is held, with a warning. Modulus falls with temperature, so
  *   this overstates the stress, which errs towards "joint needed".
- * - yield: no value (null), since holding it would overstate the strength. The verdict is
- *   still "joint needed" when the stress there reaches the last tabulated yield (yield does
- *   not rise with temperature in the exhaust range); otherwise it is null: unknown.
+ * - yield: no value, since holding it would overstate the strength. Yield does not rise with
+ *   temperature in the exhaust range, so a stress there at or above the last tabulated yield
+ *   yields, and one above the clear share of it cannot be left rigid; otherwise the verdict
+ *   is unknown.
  */
-export function restraint(c: StrainCurve, s: StrengthTables, segments: Segment[], installTempC: number): RestraintResult {
+export function restraint(c: StrainCurve, s: StrengthTables, segments: Segment[], installTempC: number, bases: StrengthBases = {}): RestraintResult {
+  const modulus = s.modulus;
+  if (!modulus) return notInData('modulus', bases);
   const warnings: EngineWarning[] = [];
   const temps = sampleTemps(c, s, segments);
   const topT = temps[temps.length - 1];
-  const eMax = s.modulus[s.modulus.length - 1].t;
-  const lastYield = s.yield[s.yield.length - 1];
+  const eMax = modulus[modulus.length - 1].t;
   if (topT > eMax) {
     warnings.push({
       code: 'MODULUS_DATA_RANGE',
       message: `The alloy's modulus data stop at ${eMax} °C, below the run's ${topT} °C: the ${eMax} °C value is used above it, which overstates the restrained stress`,
     });
   }
-  if (topT > lastYield.t) {
-    warnings.push({
-      code: 'YIELD_DATA_RANGE',
-      message: `The alloy's yield data stop at ${lastYield.t} °C, below the run's ${topT} °C: no stress ratio above it`,
-    });
-  }
-
   let peak = 0;
   let peakT = temps[0];
-  let worst = 0;
-  let worstT = temps[0];
-  let beyondYieldReached = false;
-  let beyondYieldUnknown = false;
-  for (const t of temps) {
-    const sigma = Math.abs(restrainedStressMPa(c, s, t, installTempC));
+  const stresses = temps.map((t) => {
+    const sigma = Math.abs(restrainedStressMPa(c, modulus, t, installTempC));
     if (sigma > peak) {
       peak = sigma;
       peakT = t;
     }
-    const y = interpolateOrNull(s.yield, t);
-    if (y === null) {
-      if (sigma >= lastYield.v * JOINT_NEEDED_STRESS_RATIO) beyondYieldReached = true;
-      else beyondYieldUnknown = true;
-    } else if (sigma / y > worst) {
-      worst = sigma / y;
-      worstT = t;
-    }
+    return sigma;
+  });
+  const yieldPts = s.yield;
+  if (!yieldPts) return notInData('yield', bases, { peakStressMPa: peak, peakTempC: peakT, warnings });
+
+  const lastYield = yieldPts[yieldPts.length - 1];
+  if (topT > lastYield.t) {
+    warnings.push({
+      code: 'YIELD_DATA_RANGE',
+      message: `The alloy's yield data stop at ${lastYield.t} °C, below the run's ${topT} °C: the stress is judged against yield only up to ${lastYield.t} °C`,
+    });
   }
-  const yieldAtPeak = interpolateOrNull(s.yield, peakT);
-  const coveredSomewhere = temps.some((t) => t <= lastYield.t);
-  const jointNeeded =
-    worst >= JOINT_NEEDED_STRESS_RATIO || beyondYieldReached ? true : beyondYieldUnknown ? null : false;
+  let governing: RestraintResult['governing'] = null;
+  let beyond = 0; // highest stress / last tabulated yield above the yield table
+  temps.forEach((t, i) => {
+    const y = interpolateOrNull(yieldPts, t);
+    if (y === null) beyond = Math.max(beyond, stresses[i] / lastYield.v);
+    else if (!governing || stresses[i] / y > governing.ratio) governing = { stressMPa: stresses[i], tempC: t, yieldMPa: y, ratio: stresses[i] / y };
+  });
+  const worst = (governing as RestraintResult['governing'])?.ratio ?? 0;
+  const partlyBeyond = temps.some((t) => t > lastYield.t);
+  const verdict: RestraintVerdict =
+    worst >= 1 || beyond >= 1 ? 'yields' : worst > CLEAR_STRESS_RATIO || beyond > CLEAR_STRESS_RATIO ? 'marginal' : partlyBeyond ? 'unknown' : 'clear';
   return {
-    restrainedStressMPa: peak,
-    stressPeakTempC: peakT,
-    yieldAtPeakMPa: yieldAtPeak,
-    stressRatio: yieldAtPeak === null ? null : peak / yieldAtPeak,
-    worstStressRatio: coveredSomewhere ? worst : null,
-    worstStressTempC: coveredSomewhere ? worstT : null,
-    jointNeeded,
+    missing: null,
+    peakStressMPa: peak,
+    peakTempC: peakT,
+    governing,
+    verdict,
+    clearRatio: CLEAR_STRESS_RATIO,
+    clearRatioNote: CLEAR_STRESS_NOTE,
+    modulusBasis: bases.modulusBasis ?? null,
+    yieldBasis: bases.yieldBasis ?? null,
+    jointNeeded: verdict === 'clear' ? false : verdict === 'unknown' ? null : true,
     warnings,
   };
 }

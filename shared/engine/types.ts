@@ -13,16 +13,31 @@ export interface AlloyData {
   maxIntermittentC: number;
   pricePerKg: number;
   warningRanges?: { fromC: number; toC: number; code: string; message: string }[];
+  /** Where the modulus and yield tables come from, named on the result (e.g. the cited sources' titles). */
+  modulusBasis?: string | null;
+  yieldBasis?: string | null;
 }
+
+/** What a flex part is made for: only a thermal bellows is meant to take growth. */
+export type FlexPurpose = 'thermal_bellows' | 'vibration_decoupler' | 'braided_hose';
 
 export interface FlexPart {
   id: string;
   name: string;
+  purpose: FlexPurpose;
   boreMm: number;
+  /** Convoluted (live) length L_b. */
   liveLengthMm: number;
+  /** Face-to-face length the part takes out of the tube; the live length when the maker gives none. */
+  overallLengthMm?: number | null;
+  /** Bellows mean diameter D_m; estimated from the bore when the maker gives none. */
+  meanDiameterMm?: number | null;
   ratedAxialCompressionMm: number;
   ratedAxialExtensionMm: number;
   lateralOffsetMm: number;
+  ratedAngularDeg: number;
+  /** Heat cycles the maker rates the part for at its rated movements; null when not rated. */
+  ratedCycles: number | null;
   maxTempC: number;
   price: number;
 }
@@ -39,13 +54,30 @@ export interface Tube {
   wallMm: number;
 }
 
+/**
+ * The shop's design basis for joints (shop settings): how much of a rated travel the computed
+ * movement may use, and the coldest ambient a system starts from.
+ */
+export interface DesignBasis {
+  travelShare: number;
+  coldestAmbientC: number;
+}
+
 export interface FlexOptions {
-  /** Factor on the computed growth; default DEFAULT_MOVEMENT_MARGIN. */
-  movementMargin?: number;
+  /** The part the fabricator picked; absent = the engine picks among the candidates. */
+  partId?: string;
   /** Inline candidates; when absent the caller's catalogue list is used. */
   parts?: FlexPart[];
-  /** Where the flex sits along the run (from the run's start); absent = judge it at the run's peak temperature. */
+  /** Where the flex sits along the run (its centre, from the run's start); absent = judge it at the run's peak temperature. */
   atMm?: number;
+  /** Lateral offset across the flex at the hottest state (engine movement, offsets of connected legs). */
+  lateralOffsetMm?: number;
+  /** Angular rotation across the flex at the hottest state. */
+  rotationDeg?: number;
+  /** A leg perpendicular to this run whose growth offsets the flex sideways (run alloy, uniform temperature). */
+  perpendicularLeg?: { lengthMm: number; tempC: number };
+  /** Heat cycles (cold start to full temperature and back) the system is expected to see. */
+  heatCycles?: number;
 }
 
 export interface SlipMemberInput {
@@ -59,11 +91,19 @@ export interface SlipMemberInput {
 export interface SlipInput {
   inner: SlipMemberInput;
   outer: SlipMemberInput;
+  /** Nominal diametral clearance at install: sleeve bore minus spigot OD. */
   coldClearanceMm: number;
   coldEngagementMm: number;
   coldAxialGapMm: number;
   /** Default: 1 × the inner tube's diameter. */
   minEngagementMm?: number;
+  /** ± on the spigot OD and on the sleeve bore; default from the tube standard's OD tolerance. */
+  toleranceMm?: number;
+  /** Oxide scale allowed for on each of the two sliding surfaces in service. */
+  scalePerSurfaceMm?: number;
+  /** Radial clearance the fit must keep (tightest case) and may not exceed (loosest case), hot and at the coldest start. */
+  minRadialClearanceMm?: number;
+  maxRadialClearanceMm?: number;
 }
 
 export interface RunInput {
@@ -104,68 +144,151 @@ export interface LimitResult {
   cautionBandC: number;
 }
 
+export type RestraintVerdict = 'clear' | 'marginal' | 'yields' | 'unknown';
+
+/** The point of the run where the restrained stress comes closest to yield. */
+export interface GoverningStress {
+  stressMPa: number;
+  tempC: number;
+  yieldMPa: number;
+  /** stressMPa / yieldMPa */
+  ratio: number;
+}
+
+/**
+ * The run held rigidly at both ends with nothing giving: a flag, not a design stress. The
+ * elastic figure far above yield only says that the tube would yield, buckle or crack its welds.
+ */
 export interface RestraintResult {
-  /** Peak of |E(T)·(ε(T) − ε(T0))| over the run. */
-  restrainedStressMPa: number;
-  /** Temperature at which that peak occurs. */
-  stressPeakTempC: number;
-  yieldAtPeakMPa: number | null;
-  /** restrainedStressMPa / yieldAtPeakMPa. */
-  stressRatio: number | null;
-  /** Highest local stress/yield ratio where the yield table covers the run; the verdict is judged on it. */
-  worstStressRatio: number | null;
-  worstStressTempC: number | null;
+  /** What the alloy's data lacks for this check; null when the data covers it. */
+  missing: 'modulus' | 'yield' | null;
+  /** Highest |E(T)·(ε(T) − ε(T0))| over the run; null without modulus data. */
+  peakStressMPa: number | null;
+  peakTempC: number | null;
+  /** Where stress/yield is highest among the temperatures the yield table covers; the one figure every screen shows. */
+  governing: GoverningStress | null;
+  verdict: RestraintVerdict;
+  /** Stress/yield at or below which the run may stay rigidly held. */
+  clearRatio: number;
+  clearRatioNote: string;
+  modulusBasis: string | null;
+  yieldBasis: string | null;
   /** null when the data cannot decide. */
   jointNeeded: boolean | null;
   warnings: EngineWarning[];
 }
 
+/** One check of a joint, in words a fabricator can act on. */
+export interface JointCheck {
+  code: string;
+  ok: boolean;
+  message: string;
+}
+
+/** Movement across a flex at one state, from the install position. */
+export interface FlexState {
+  state: 'install' | 'hot' | 'cold';
+  tempC: number;
+  /** Run growth from install (positive = the run is longer, closing the flex). */
+  axialGrowthMm: number;
+  lateralMm: number;
+  rotationDeg: number;
+}
+
+export interface FlexStateUse {
+  state: FlexState['state'];
+  /** Axial position from the part's neutral length (positive = stretched). */
+  positionMm: number;
+  /** Lateral and angular movement as equivalent axial movement (EJMA relations). */
+  equivalentMm: number;
+  /** Compression and extension demand as shares of the part's rated compression and extension. */
+  compressionUse: number;
+  extensionUse: number;
+}
+
 export interface FlexCandidateResult {
   id: string;
   name: string;
+  purpose: FlexPurpose;
   fits: boolean;
+  /** Why it does not fit (empty when it fits). */
   reasons: string[];
-  /** Cold extension to set at install (positive = stretched). */
-  presetMm: number;
-  /** Position at the computed hot growth relative to neutral (negative = compressed). */
-  hotPositionMm: number;
+  /** Cold stretch to set at install (negative = compressed); null when no pre-set keeps the part within its share of travel. */
+  presetMm: number | null;
+  meanDiameterMm: number;
+  meanDiameterEstimated: boolean;
+  uses: FlexStateUse[];
+  lateralUse: number;
+  angularUse: number;
+  /** Highest share of any rating the part reaches. */
+  worstUse: number;
+  warnings: EngineWarning[];
 }
 
 export interface FlexResult {
-  movementMargin: number;
-  movementMarginNote: string;
-  growthMm: number;
-  requiredMovementMm: number;
-  /** Cold pre-stretch that leaves the flex at neutral when hot. */
-  presetMm: number;
+  travelShare: number;
+  travelShareNote: string;
+  coldestAmbientC: number;
+  relationNote: string;
+  states: FlexState[];
+  /** Axial movement from the coldest start to the hottest state. */
+  axialRangeMm: number;
   /** Temperature the part's rating is checked against. */
   tempAtFlexC: number;
   tempBasis: 'location' | 'peak';
+  heatCycles: number | null;
   boreFitToleranceMm: number;
+  /** The part the run uses: the fabricator's pick (even when it does not fit), else the engine's among those that fit. */
   chosen: (FlexCandidateResult & { part: FlexPart }) | null;
+  chosenBy: 'fabricator' | 'engine' | null;
   candidates: FlexCandidateResult[];
-  /** Set when parts were offered and none fits. */
+  /** Set when no part can be used. */
   noneFitsReason: string | null;
+}
+
+/** Radial clearance of a slip joint at one state. */
+export interface SlipState {
+  state: 'install' | 'hot' | 'cold';
+  innerTempC: number;
+  outerTempC: number;
+  /** Spigot diametral growth minus sleeve diametral growth from install. */
+  differentialGrowthMm: number;
+  nominalRadialMm: number;
+  /** With both members at the tight end of their tolerance and (in service) scale on both surfaces. */
+  tightestRadialMm: number;
+  /** With both members at the loose end of their tolerance and no scale. */
+  loosestRadialMm: number;
 }
 
 export interface SlipResult {
   innerDiameterMm: number;
   outerDiameterMm: number;
-  hotAxialClosureMm: number;
+  coldClearanceMm: number;
+  toleranceMm: number;
+  toleranceNote: string;
+  scalePerSurfaceMm: number;
+  scaleNote: string;
+  minRadialClearanceMm: number;
+  maxRadialClearanceMm: number;
+  clearanceLimitsNote: string;
+  states: SlipState[];
+  travelShare: number;
+  /** How far the gap closes at the hottest state (the run's growth). */
+  hotClosureMm: number;
+  /** How far the spigot draws out at the coldest start (the run's contraction, ≥ 0). */
+  coldDrawOutMm: number;
   coldAxialGapMm: number;
+  /** Gap the hot closure needs with the travel share: closure ÷ share. */
+  requiredGapMm: number;
   bottomsOut: boolean;
   coldEngagementMm: number;
-  /** Engagement at the hot position (capped where the gap bottoms out). */
+  /** Engagement hot (capped where the gap bottoms out) and at the coldest start. */
   hotEngagementMm: number;
+  coldestEngagementMm: number;
   minEngagementMm: number;
   minEngagementNote: string;
-  engagementOk: boolean;
-  innerDiametralGrowthMm: number;
-  outerDiametralGrowthMm: number;
-  differentialDiametralGrowthMm: number;
-  coldClearanceMm: number;
-  hotClearanceMm: number;
-  verdict: 'seizes' | 'ok';
+  checks: JointCheck[];
+  verdict: 'ok' | 'fails';
 }
 
 export interface RunResult {
@@ -174,12 +297,7 @@ export interface RunResult {
   growthPerMetreCurve: GrowthPerMetrePoint[];
   totalLengthMm: number;
   peakTempC: number;
-  restrainedStressMPa: number;
-  stressPeakTempC: number;
-  yieldAtPeakMPa: number | null;
-  stressRatio: number | null;
-  worstStressRatio: number | null;
-  jointNeeded: boolean | null;
+  restraint: RestraintResult;
   limit: LimitResult;
   massKg: number;
   materialCost: number;

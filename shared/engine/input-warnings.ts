@@ -1,0 +1,31 @@
+import type { EngineWarning, Segment } from './types';
+
+/** A jump larger than this between one segment's end and the next one's start is worth a word. */
+export const TEMPERATURE_STEP_WARN_C = 1;
+
+const r = (x: number) => Math.round(x * 10) / 10;
+
+/** Inputs that compute but are likely mistakes, or change what the figures mean. */
+export function inputWarnings(segments: Segment[], installTempC: number, growthMm: number): EngineWarning[] {
+  const warnings: EngineWarning[] = [];
+  const coldest = Math.min(...segments.flatMap((s) => [s.startTempC, s.endTempC]));
+  if (coldest < installTempC) {
+    warnings.push({
+      code: growthMm < 0 ? 'RUN_SHRINKS' : 'COLDER_THAN_INSTALL',
+      message:
+        growthMm < 0
+          ? `The run runs colder than its ${r(installTempC)} °C install temperature, so it shrinks: the growth is negative (${r(growthMm * 100) / 100} mm). Check the install and running temperatures`
+          : `Part of the run (down to ${r(coldest)} °C) is colder than its ${r(installTempC)} °C install temperature and shrinks there; the growth is the net of both`,
+    });
+  }
+  for (let i = 1; i < segments.length; i++) {
+    const step = segments[i].startTempC - segments[i - 1].endTempC;
+    if (Math.abs(step) > TEMPERATURE_STEP_WARN_C) {
+      warnings.push({
+        code: 'TEMPERATURE_STEP',
+        message: `Segment ${i} ends at ${r(segments[i - 1].endTempC)} °C and segment ${i + 1} starts at ${r(segments[i].startTempC)} °C, a step of ${r(Math.abs(step))} °C: temperature along one tube does not jump, so check both values`,
+      });
+    }
+  }
+  return warnings;
+}
