@@ -88,11 +88,11 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   });
   api.use('/auth', authRouter(auth, authService, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS));
   api.use('/users', usersRouter(usersService));
-  api.use('/calc', calcRouter(new CalcService(catalogueService, flexPartsService)));
+  const shopSettings = new ShopSettingsService(dataSource);
+  api.use('/calc', calcRouter(new CalcService(catalogueService, flexPartsService, shopSettings)));
   api.use('/flex-parts', flexPartsRouter(flexPartsService));
   api.use(datasheetsRouter(datasheetsService, options.uploadsDir));
-  api.use(jobsRouter(new JobsService(new JobsStore(dataSource), new RunResults(catalogueService, flexPartsService))));
-  const shopSettings = new ShopSettingsService(dataSource);
+  api.use(jobsRouter(new JobsService(new JobsStore(dataSource), new RunResults(catalogueService, flexPartsService, shopSettings))));
   const quotes = new QuotesService(new QuotesStore(dataSource), new JobsStore(dataSource), catalogueService, shopSettings, usersRepository, options.mailer);
   api.use('/settings', shopSettingsRouter(shopSettings));
   api.use('/quotes', quotesRouter(quotes, options.publicUrl));

@@ -5,6 +5,7 @@ import * as path from 'path';
 interface FlexPart {
   code: string; name: string; boreMm: number; liveLengthMm: number;
   ratedAxialCompressionMm: number; ratedAxialExtensionMm: number; lateralOffsetMm: number;
+  purpose: string; overallLengthMm: number; meanDiameterMm: number; ratedAngularDeg: number; ratedCycles: number | null;
   maxTempC: number; price: number; currency: string; isDemo: boolean;
 }
 
@@ -17,7 +18,9 @@ describe('seed flex parts', () => {
     expect(parts.length).toBeGreaterThanOrEqual(10);
     const codes = parts.map((p) => p.code);
     expect(new Set(codes).size).toBe(codes.length);
-    codes.forEach((c) => expect(c).toMatch(/^DL-FX-\d{2,3}-\d{3}$/));
+    codes.forEach((c) => expect(c).toMatch(/^DL-(FX|VD)-\d{2,3}-\d{3}$/));
+    // Flex sections take growth; the decouplers are there to show the warning when one is picked for it.
+    parts.forEach((p) => expect(p.purpose).toBe(p.code.startsWith('DL-FX') ? 'thermal_bellows' : 'vibration_decoupler'));
   });
 
   it('when bores are read, then each is a common exhaust bore and every bore is covered', () => {
@@ -37,6 +40,17 @@ describe('seed flex parts', () => {
       expect(p.liveLengthMm).toBeLessThanOrEqual(300);
       expect(p.maxTempC).toBeGreaterThanOrEqual(700);
       expect(p.maxTempC).toBeLessThanOrEqual(1000);
+    }
+  });
+
+  it('when sizes for the equivalent-movement check are read, then the mean diameter sits just outside the bore and the ends add to the live length', () => {
+    for (const p of parts) {
+      // A bellows' mean diameter is the bore plus about one convolution height: invented demo values 10–20 % over the bore.
+      expect(p.meanDiameterMm / p.boreMm).toBeGreaterThan(1.1);
+      expect(p.meanDiameterMm / p.boreMm).toBeLessThan(1.2);
+      expect(p.overallLengthMm).toBeGreaterThan(p.liveLengthMm);
+      expect(p.ratedAngularDeg).toBeGreaterThan(0);
+      if (p.ratedCycles !== null) expect(Number.isInteger(p.ratedCycles)).toBe(true);
     }
   });
 

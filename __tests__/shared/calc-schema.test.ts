@@ -79,8 +79,39 @@ describe('POST /api/calc/run body', () => {
     expect(calcRunRequestSchema.safeParse({ ...example(), slip: { ...slip, outer: { tempC: 700 } } }).success).toBe(true);
   });
 
-  it('when the flex margin is below 1 or its position is beyond the run, then the flex field is named', () => {
-    expect(fieldsOf({ ...example(), flex: { movementMargin: 0.8 } })).toHaveProperty(['flex.movementMargin']);
+  it('when the flex position is beyond the run or a movement is negative, then the flex field is named', () => {
     expect(fieldsOf({ ...example(), flex: { atMm: 601 } })).toHaveProperty(['flex.atMm']);
+    expect(fieldsOf({ ...example(), flex: { lateralOffsetMm: -1, rotationDeg: 50 } })).toEqual({
+      'flex.lateralOffsetMm': 'Cannot be negative',
+      'flex.rotationDeg': 'Rotation must be at most 45 °',
+    });
+    expect(fieldsOf({ ...example(), flex: { heatCycles: 2.5 } })).toHaveProperty(['flex.heatCycles']);
+  });
+
+  it('when a temperature is past what any pipework alloy survives, then it is refused with its path and nothing computes', () => {
+    const body = example();
+    body.segments[0].startTempC = 5000;
+    expect(fieldsOf(body)).toEqual({ 'segments.0.startTempC': 'Above 1300 °C: no alloy for pipework holds together there' });
+  });
+
+  it('when lengths or sizes are absurd, then each is refused with its path (two 1e308 mm segments no longer pass)', () => {
+    const body = example();
+    body.segments = [
+      { lengthMm: 1e308, startTempC: 500, endTempC: 400 },
+      { lengthMm: 1e308, startTempC: 400, endTempC: 300 },
+    ];
+    expect(fieldsOf(body)).toEqual({ 'segments.0.lengthMm': 'A segment must be at most 50000 mm', 'segments.1.lengthMm': 'A segment must be at most 50000 mm' });
+    expect(fieldsOf({ ...example(), tube: { odMm: 1e9, wallMm: 2 } })).toHaveProperty(['tube.odMm']);
+  });
+
+  it('when a slip joint’s clearance limits cross, then the maximum is named', () => {
+    const slip = { inner: { tempC: 850 }, outer: { tempC: 700 }, coldClearanceMm: 0.2, coldEngagementMm: 80, coldAxialGapMm: 15, minRadialClearanceMm: 0.3, maxRadialClearanceMm: 0.2 };
+    expect(fieldsOf({ ...example(), slip })).toEqual({ 'slip.maxRadialClearanceMm': 'The maximum must be above the minimum' });
+  });
+
+  it('when the alloy has no modulus or yield table, then the body still parses (the stress check says it is not in the data)', () => {
+    const body = example();
+    body.alloy = { ...(body.alloy as Record<string, unknown>), modulus: [], yield: [] };
+    expect(calcRunRequestSchema.safeParse(body).success).toBe(true);
   });
 });

@@ -75,22 +75,23 @@ describe('run inputs for the calculator', () => {
 });
 
 describe('job totals', () => {
-  const result = (growthMm: number, massKg: number, materialCost: number) => ({ growthMm, massKg, materialCost }) as RunResult;
-  const seg = (lengthMm: number, startTempC: number, endTempC: number) => [{ lengthMm, startTempC, endTempC }];
+  const result = (growthMm: number, massKg: number, materialCost: number, totalLengthMm: number, peakTempC: number) =>
+    ({ growthMm, massKg, materialCost, totalLengthMm, peakTempC }) as RunResult;
 
-  it('when some runs have no result, then growth, mass and cost sum the others while length and peak cover all', () => {
+  it('when some runs have no result, then every total, length and peak included, leaves them out', () => {
     const totals = jobTotals([
-      { segments: seg(400, 900, 850), result: result(5, 2, 20), currency: 'EUR' },
-      { segments: seg(600, 700, 600), result: result(7, 3, 9), currency: 'EUR' },
-      { segments: seg(1000, 950, 400), result: null, currency: null },
+      { result: result(5, 2, 20, 400, 900), currency: 'EUR' },
+      { result: result(7, 3, 9, 600, 700), currency: 'EUR' },
+      // A run saved at 5000 °C has no result: it must not set the peak or add its length.
+      { result: null, currency: null },
     ]);
     expect(totals).toEqual({
       growthMm: 12,
       massKg: 5,
       materialCost: 29,
       currency: 'EUR',
-      lengthMm: 2000,
-      peakTempC: 950,
+      lengthMm: 1000,
+      peakTempC: 900,
       runCount: 3,
       runsWithProblems: 1,
     });
@@ -98,8 +99,8 @@ describe('job totals', () => {
 
   it('when runs are priced in different currencies, then there is no total cost', () => {
     const totals = jobTotals([
-      { segments: seg(400, 900, 850), result: result(5, 2, 20), currency: 'EUR' },
-      { segments: seg(600, 700, 600), result: result(7, 3, 9), currency: 'USD' },
+      { result: result(5, 2, 20, 400, 900), currency: 'EUR' },
+      { result: result(7, 3, 9, 600, 700), currency: 'USD' },
     ]);
     expect(totals.materialCost).toBeNull();
     expect(totals.currency).toBeNull();

@@ -3,6 +3,8 @@ import type { AlloyData } from '../../shared/engine/types';
 import { AppError } from '../http/app-error';
 import type { CatalogueService } from '../catalogue/catalogue.service';
 import type { FlexPartsService } from '../flex-parts/flex-parts.service';
+import type { ShopSettingsService } from '../settings/shop-settings.service';
+import { designBasisOf } from '../../shared/schemas/shop-settings';
 
 export interface AlloyUsed {
   id: string;
@@ -17,6 +19,7 @@ export class CalcService {
   constructor(
     private readonly catalogue: CatalogueService,
     private readonly flexParts: FlexPartsService,
+    private readonly settings: ShopSettingsService,
   ) {}
 
   /** Published catalogue data for an id, or a 400 naming the field that asked for it. */
@@ -47,8 +50,9 @@ export class CalcService {
       if (id) slipAlloys[side] = (await this.published(id, `slip.${side}.alloyId`)).data;
     }
     const flexParts = body.flex && !body.flex.parts ? await this.flexParts.forSizing() : undefined;
+    const design = designBasisOf(await this.settings.get());
     try {
-      return { ...calculateRun(body, alloy, { flexParts, slipAlloys }), alloy: used };
+      return { ...calculateRun(body, alloy, { flexParts, slipAlloys, design }), alloy: used };
     } catch (err) {
       if (isEngineInputError(err)) throw AppError.badRequest('invalid_input', 'Some values are outside what the data covers.', err.fields);
       throw err;

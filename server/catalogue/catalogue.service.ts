@@ -178,6 +178,7 @@ export class CatalogueService {
       throw AppError.notFound('There is no published alloy with this id.');
     }
     const v = (await this.views(repo, [alloy.publishedVersionId])).get(alloy.publishedVersionId)!;
+    const sources = await repo.findSources([...new Set([...v.modulus, ...v.yield].map((p) => p.sourceId))]);
     return {
       alloyId: alloy.id,
       designation: v.designation,
@@ -185,7 +186,7 @@ export class CatalogueService {
       family: v.family,
       version: v.version,
       versionId: v.versionId,
-      data: toAlloyData(v),
+      data: toAlloyData(v, sources),
       currency: v.currency,
     };
   }

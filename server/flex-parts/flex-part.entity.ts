@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import type { FlexPurpose } from '../../shared/engine/types';
 
 @Entity({ name: 'flex_part' })
 export class FlexPartRow {
@@ -10,6 +11,11 @@ export class FlexPartRow {
   @Column('real', { name: 'rated_axial_compression_mm' }) ratedAxialCompressionMm: number;
   @Column('real', { name: 'rated_axial_extension_mm' }) ratedAxialExtensionMm: number;
   @Column('real', { name: 'lateral_offset_mm' }) lateralOffsetMm: number;
+  @Column('varchar', { default: 'thermal_bellows' }) purpose: FlexPurpose;
+  @Column('real', { name: 'overall_length_mm', nullable: true }) overallLengthMm: number | null;
+  @Column('real', { name: 'mean_diameter_mm', nullable: true }) meanDiameterMm: number | null;
+  @Column('real', { name: 'rated_angular_deg', default: 0 }) ratedAngularDeg: number;
+  @Column('integer', { name: 'rated_cycles', nullable: true }) ratedCycles: number | null;
   @Column('real', { name: 'max_temp_c' }) maxTempC: number;
   @Column('real') price: number;
   @Column('varchar') currency: string;

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { FlexPart } from '../../shared/engine/types';
 import type { FlexPartInput, FlexPartView } from '../../shared/schemas/alloy';
+import { toSizingPart } from '../../shared/catalogue/flex-sizing-part';
 import { AppError } from '../http/app-error';
 import type { FlexPartRow } from './flex-part.entity';
 import type { FlexPartsRepository } from './flex-parts.repository';
@@ -15,6 +16,11 @@ function view(row: FlexPartRow): FlexPartView {
     ratedAxialCompressionMm: row.ratedAxialCompressionMm,
     ratedAxialExtensionMm: row.ratedAxialExtensionMm,
     lateralOffsetMm: row.lateralOffsetMm,
+    purpose: row.purpose,
+    overallLengthMm: row.overallLengthMm,
+    meanDiameterMm: row.meanDiameterMm,
+    ratedAngularDeg: row.ratedAngularDeg,
+    ratedCycles: row.ratedCycles,
     maxTempC: row.maxTempC,
     price: row.price,
     currency: row.currency,
@@ -32,10 +38,7 @@ export class FlexPartsService {
 
   /** The active parts, as the calculator's flex sizing reads them. */
   async forSizing(): Promise<FlexPart[]> {
-    return (await this.list(false)).map(({ code, name, currency: _c, active: _a, isDemo: _d, ...part }) => ({
-      ...part,
-      name: `${code} ${name}`,
-    }));
+    return (await this.list(false)).map(toSizingPart);
   }
 
   async create(input: FlexPartInput, isDemo = false): Promise<FlexPartView> {

@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { jobTotals } from '../../shared/jobs/job-totals';
+import { stressFigure } from '../../shared/jobs/stress-figure';
 import type { PublicUser } from '../../shared/schemas/auth';
 import {
   runFieldsSchema,
@@ -42,9 +43,8 @@ function figuresOf(c: Computed): CompareRow['figures'] {
     growthMm: r.growthMm,
     limitStatus: r.limit.status,
     marginC: r.limit.marginC,
-    stressRatio: r.stressRatio,
-    worstStressRatio: r.worstStressRatio,
-    jointNeeded: r.jointNeeded,
+    stress: stressFigure(r.restraint),
+    jointNeeded: r.restraint.jointNeeded,
     massKg: r.massKg,
     materialCost: r.materialCost,
     currency: c.currency,

@@ -1,10 +1,12 @@
 import { calculateRun, isEngineInputError } from '../../shared/schemas/calc';
-import type { AlloyData, FlexPart, RunResult } from '../../shared/engine/types';
+import type { AlloyData, DesignBasis, FlexPart, RunResult } from '../../shared/engine/types';
 import { runFields, toCalcRequest } from '../../shared/jobs/run-input';
 import type { AlloyUsed, RunFields, RunProblem } from '../../shared/schemas/jobs';
 import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
 import type { FlexPartsService } from '../flex-parts/flex-parts.service';
 import { AppError } from '../http/app-error';
+import type { ShopSettingsService } from '../settings/shop-settings.service';
+import { designBasisOf } from '../../shared/schemas/shop-settings';
 
 /** What the catalogue says about an alloy id right now. */
 export type AlloyLookup =
@@ -29,11 +31,18 @@ const named = (a: AlloyUsed) => `${a.designation} (${a.uns})`;
 export class ResultSession {
   private readonly alloys = new Map<string, Promise<AlloyLookup>>();
   private flexParts: Promise<FlexPart[]> | null = null;
+  private design: Promise<DesignBasis> | null = null;
 
   constructor(
     private readonly catalogue: CatalogueService,
     private readonly flex: FlexPartsService,
+    private readonly settings: ShopSettingsService,
   ) {}
+
+  private designBasis(): Promise<DesignBasis> {
+    this.design ??= this.settings.get().then(designBasisOf);
+    return this.design;
+  }
 
   alloy(id: string): Promise<AlloyLookup> {
     let found = this.alloys.get(id);
@@ -87,8 +96,9 @@ export class ResultSession {
       }
     }
     const flexParts = fields.joint.type === 'flex' ? await this.parts() : undefined;
+    const design = fields.joint.type === 'none' ? undefined : await this.designBasis();
     try {
-      const result = calculateRun(toCalcRequest(fields), main.published.data, { flexParts, slipAlloys });
+      const result = calculateRun(toCalcRequest(fields), main.published.data, { flexParts, slipAlloys, design });
       return { alloy: main.used, result, problem: null, currency: main.published.currency };
     } catch (err) {
       if (!isEngineInputError(err)) throw err;
@@ -127,9 +137,10 @@ export class RunResults {
   constructor(
     private readonly catalogue: CatalogueService,
     private readonly flexParts: FlexPartsService,
+    private readonly settings: ShopSettingsService,
   ) {}
 
   session(): ResultSession {
-    return new ResultSession(this.catalogue, this.flexParts);
+    return new ResultSession(this.catalogue, this.flexParts, this.settings);
   }
 }

@@ -85,9 +85,15 @@ export async function seedFlexParts(dataSource: DataSource): Promise<number> {
   let added = 0;
   for (const raw of readJson<Record<string, unknown>[]>('flex-parts.json')) {
     const input = flexPartInputSchema.parse(raw);
-    if (await repo.findByCode(input.code)) continue;
-    await service.create(input, true);
-    added += 1;
+    const found = await repo.findByCode(input.code);
+    if (!found) {
+      await service.create(input, true);
+      added += 1;
+    } else if (found.isDemo && found.meanDiameterMm === null && found.ratedAngularDeg === 0 && found.ratedCycles === null) {
+      // A demo part from before the ratings existed gets them; a part the shop has edited is left alone.
+      const { purpose, overallLengthMm, meanDiameterMm, ratedAngularDeg, ratedCycles } = input;
+      await service.update(found.id, { purpose, overallLengthMm, meanDiameterMm, ratedAngularDeg, ratedCycles });
+    }
   }
   return added;
 }

@@ -7,6 +7,7 @@ import { FlexPartsService } from '../flex-parts/flex-parts.service';
 import { JobsStore } from '../jobs/jobs.repository';
 import { JobsService } from '../jobs/jobs.service';
 import { RunResults } from '../jobs/run-results';
+import { ShopSettingsService } from '../settings/shop-settings.service';
 import { UsersRepository } from '../users/users.repository';
 import { toPublicUser } from '../users/users.service';
 
@@ -62,8 +63,8 @@ export const DEMO_JOBS: DemoJob[] = [
         ],
         startFixing: 'turbo_outlet',
         endFixing: 'v_band',
-        joint: { type: 'flex', atMm: 300 },
-        notes: 'Flex section 300 mm from the turbo outlet; support the flex on both sides, never let it carry weight.',
+        joint: { type: 'flex', atMm: 300, lateralOffsetMm: 1.5, heatCycles: 5000 },
+        notes: 'Flex section 300 mm from the turbo outlet; 1.5 mm of engine rock across it. Support the flex on both sides, never let it carry weight.',
       },
       {
         name: 'Mid-pipe',
@@ -72,7 +73,8 @@ export const DEMO_JOBS: DemoJob[] = [
         segments: [{ lengthMm: 900, startTempC: 640, endTempC: 520 }],
         startFixing: 'v_band',
         endFixing: 'slip_joint',
-        joint: { type: 'slip', inner: { tempC: 520 }, outer: { tempC: 480 }, coldClearanceMm: 0.3, coldEngagementMm: 90, coldAxialGapMm: 25 },
+        joint: { type: 'slip', inner: { tempC: 520 }, outer: { tempC: 480 }, coldClearanceMm: 0.38, coldEngagementMm: 90, coldAxialGapMm: 25, toleranceMm: 0.03 },
+        notes: 'Sleeve expanded on the mandrel to the measured spigot: ±0.03 mm on the sized fit.',
       },
       {
         name: 'Tailpipe',
@@ -122,7 +124,17 @@ export const DEMO_JOBS: DemoJob[] = [
         segments: [{ lengthMm: 3000, startTempC: 480, endTempC: 450 }],
         startFixing: 'equipment_nozzle',
         endFixing: 'slip_joint',
-        joint: { type: 'slip', inner: { tempC: 450 }, outer: { tempC: 430 }, coldClearanceMm: 0.5, coldEngagementMm: 160, coldAxialGapMm: 40 },
+        joint: {
+          type: 'slip',
+          inner: { tempC: 450 },
+          outer: { tempC: 430 },
+          coldClearanceMm: 0.6,
+          coldEngagementMm: 160,
+          coldAxialGapMm: 40,
+          toleranceMm: 0.05,
+          maxRadialClearanceMm: 0.5,
+        },
+        notes: 'Rolled sleeve sized to the duct (±0.05 mm). A low-pressure air duct takes a looser fit than an exhaust: up to 0.5 mm radial.',
       },
       {
         name: 'Slip joint to drum inlet',
@@ -143,7 +155,7 @@ export async function seedDemoJobs(dataSource: DataSource): Promise<number> {
   const catalogueStore = new CatalogueStore(dataSource);
   const catalogue = new CatalogueService(catalogueStore);
   const store = new JobsStore(dataSource);
-  const jobs = new JobsService(store, new RunResults(catalogue, new FlexPartsService(new FlexPartsRepository(dataSource))));
+  const jobs = new JobsService(store, new RunResults(catalogue, new FlexPartsService(new FlexPartsRepository(dataSource)), new ShopSettingsService(dataSource)));
 
   let added = 0;
   for (const demo of DEMO_JOBS) {

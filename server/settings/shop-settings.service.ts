@@ -1,5 +1,5 @@
 import type { DataSource, Repository } from 'typeorm';
-import { DEMO_SHOP_SETTINGS, type ShopSettings } from '../../shared/schemas/shop-settings';
+import { DEMO_SHOP_SETTINGS, shopSettingsSchema, type ShopSettings } from '../../shared/schemas/shop-settings';
 import { ShopSettingsRow } from './shop-settings.entity';
 
 const ROW_ID = 'shop';
@@ -13,7 +13,9 @@ export class ShopSettingsService {
   }
 
   async get(): Promise<ShopSettings> {
-    return (await this.repo.findOneBy({ id: ROW_ID }))?.value ?? DEMO_SHOP_SETTINGS;
+    const stored = (await this.repo.findOneBy({ id: ROW_ID }))?.value;
+    // Settings saved before a field existed take that field's default.
+    return stored ? shopSettingsSchema.parse(stored) : DEMO_SHOP_SETTINGS;
   }
 
   async save(value: ShopSettings, userName: string): Promise<ShopSettings> {

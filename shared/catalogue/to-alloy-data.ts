@@ -14,8 +14,15 @@ type VersionData = Pick<
   | 'warningRanges'
 >;
 
-/** The catalogue's view of an alloy version, reduced to what the engine reads. */
-export function toAlloyData(v: VersionData): AlloyData {
+/** The titles of the sources a table cites, in order of first use: the basis a result names. */
+export function tableBasis(points: { sourceId: string }[], sources: { id: string; title: string }[]): string | null {
+  const titles = new Map(sources.map((s) => [s.id, s.title]));
+  const named = [...new Set(points.map((p) => titles.get(p.sourceId)).filter((t): t is string => t !== undefined))];
+  return named.length > 0 ? named.join('; ') : null;
+}
+
+/** The catalogue's view of an alloy version, reduced to what the engine reads; with the cited sources, the tables' bases too. */
+export function toAlloyData(v: VersionData, sources: { id: string; title: string }[] = []): AlloyData {
   return {
     referenceTempC: v.referenceTempC,
     cte: v.cte.map(({ tempC, meanUmPerMK }) => ({ tempC, meanUmPerMK })),
@@ -26,5 +33,7 @@ export function toAlloyData(v: VersionData): AlloyData {
     maxIntermittentC: v.maxIntermittentC,
     pricePerKg: v.pricePerKg,
     warningRanges: v.warningRanges,
+    modulusBasis: tableBasis(v.modulus, sources),
+    yieldBasis: tableBasis(v.yield, sources),
   };
 }

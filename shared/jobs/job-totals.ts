@@ -1,19 +1,19 @@
 import type { JobTotals, RunView } from '../schemas/jobs';
 
-type TotalsRun = Pick<RunView, 'segments' | 'result' | 'currency'>;
+type TotalsRun = Pick<RunView, 'result' | 'currency'>;
 
-/** A job's totals from its runs: growth, mass and cost over the runs with a result; length and peak from the inputs. */
+/** A job's totals over the runs with a result: a run the data no longer covers is counted as a problem and in nothing else. */
 export function jobTotals(runs: TotalsRun[]): JobTotals {
   const computed = runs.filter((r) => r.result !== null);
   const currencies = new Set(computed.map((r) => r.currency));
   const oneCurrency = currencies.size <= 1;
-  const temps = runs.flatMap((r) => r.segments.flatMap((s) => [s.startTempC, s.endTempC]));
+  const temps = computed.map((r) => r.result!.peakTempC);
   return {
     growthMm: computed.reduce((sum, r) => sum + r.result!.growthMm, 0),
     massKg: computed.reduce((sum, r) => sum + r.result!.massKg, 0),
     materialCost: oneCurrency ? computed.reduce((sum, r) => sum + r.result!.materialCost, 0) : null,
     currency: oneCurrency ? (computed[0]?.currency ?? null) : null,
-    lengthMm: runs.reduce((sum, r) => sum + r.segments.reduce((s, seg) => s + seg.lengthMm, 0), 0),
+    lengthMm: computed.reduce((sum, r) => sum + r.result!.totalLengthMm, 0),
     peakTempC: temps.length > 0 ? Math.max(...temps) : null,
     runCount: runs.length,
     runsWithProblems: runs.length - computed.length,

@@ -12,10 +12,8 @@ export function toCalcRequest(run: RunFields): CalcRunRequest & RunInput {
   };
   const joint = run.joint;
   if (joint.type === 'flex') {
-    request.flex = {
-      ...(joint.movementMargin !== undefined ? { movementMargin: joint.movementMargin } : {}),
-      ...(joint.atMm !== undefined ? { atMm: joint.atMm } : {}),
-    };
+    const { type: _type, ...flex } = joint;
+    request.flex = flex;
   } else if (joint.type === 'slip') {
     const { type: _type, ...slip } = joint;
     request.slip = slip;

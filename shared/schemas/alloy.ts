@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { FLEX_PURPOSES } from '../engine/flex-purposes';
 
 export const ALLOY_FAMILIES = [
   'austenitic_stainless',
@@ -140,11 +141,16 @@ export type AlloyListQuery = z.infer<typeof alloyListQuerySchema>;
 export const flexPartInputSchema = z.object({
   code: z.string({ error: 'Enter a part code' }).trim().min(2, { error: 'Enter a part code' }).max(40),
   name: z.string({ error: 'Enter a name' }).trim().min(2, { error: 'Enter a name' }).max(120),
+  purpose: z.enum(FLEX_PURPOSES, { error: 'Say what the part is for' }).default('thermal_bellows'),
   boreMm: positive('Bore').max(1000),
   liveLengthMm: positive('Live length').max(2000),
+  overallLengthMm: positive('Overall length').max(3000).nullable().default(null),
+  meanDiameterMm: positive('Mean diameter').max(1200).nullable().default(null),
   ratedAxialCompressionMm: positive('Rated compression').max(500),
   ratedAxialExtensionMm: finite('Rated extension').min(0, { error: 'Rated extension cannot be negative' }).max(500),
   lateralOffsetMm: finite('Lateral offset').min(0, { error: 'Lateral offset cannot be negative' }).max(500),
+  ratedAngularDeg: finite('Rated rotation').min(0, { error: 'Rated rotation cannot be negative' }).max(90, { error: 'At most 90°' }).default(0),
+  ratedCycles: finite('Rated cycles').int({ error: 'Enter a whole number of cycles' }).min(1, { error: 'At least 1 cycle' }).max(1e9).nullable().default(null),
   maxTempC: tempC,
   price: finite('Price').min(0, { error: 'Price cannot be negative' }),
   currency: z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, { error: 'Use a three-letter currency code' }),
@@ -152,6 +158,12 @@ export const flexPartInputSchema = z.object({
 });
 export type FlexPartInput = z.infer<typeof flexPartInputSchema>;
 export const flexPartPatchSchema = flexPartInputSchema.partial();
+
+export const FLEX_PURPOSE_LABELS: Record<(typeof FLEX_PURPOSES)[number], string> = {
+  thermal_bellows: 'Thermal bellows (takes growth)',
+  vibration_decoupler: 'Vibration decoupler (not for growth)',
+  braided_hose: 'Braided hose (not for growth)',
+};
 
 // ---- What the API answers ----
 

@@ -1,11 +1,15 @@
 import { z } from 'zod';
-import { MIN_TEMP_C } from '../engine/expansion';
+import { FLEX_PURPOSES } from '../engine/flex-purposes';
 import type { RunInput } from '../engine/types';
+import { BOUNDS } from './bounds';
 
 const num = (error = 'Enter a number') => z.number({ error });
 const positive = (what: string) => num().positive({ error: `${what} must be more than 0` });
-const temperature = num().min(MIN_TEMP_C, { error: `Below ${MIN_TEMP_C} °C, the lowest temperature the calculator handles` });
-const lengthMm = num().positive({ error: 'Length must be more than 0 mm' });
+const atMost = (schema: z.ZodNumber, max: number, what: string, unit: string) => schema.max(max, { error: `${what} must be at most ${max} ${unit}` });
+const temperature = num()
+  .min(BOUNDS.minRunTempC, { error: `Below ${BOUNDS.minRunTempC} °C, the lowest temperature the calculator handles` })
+  .max(BOUNDS.maxRunTempC, { error: `Above ${BOUNDS.maxRunTempC} °C: no alloy for pipework holds together there` });
+const lengthMm = atMost(num().positive({ error: 'Length must be more than 0 mm' }), BOUNDS.maxSegmentMm, 'A segment', 'mm');
 
 function strictlyRising(points: { tempC: number }[], ctx: z.RefinementCtx): void {
   for (let i = 1; i < points.length; i++) {
@@ -23,8 +27,9 @@ const yieldRow = z.object({ tempC: num(), mpa: positive('Yield strength') });
 export const alloyDataSchema = z.object({
     referenceTempC: num(),
     cte: z.array(cteRow).min(1, { error: 'Give at least one expansion point' }).superRefine(strictlyRising),
-    modulus: z.array(modulusRow).min(1, { error: 'Give at least one modulus point' }).superRefine(strictlyRising),
-    yield: z.array(yieldRow).min(1, { error: 'Give at least one yield point' }).superRefine(strictlyRising),
+    // Either may be empty: growth and joints still come out, the stress check says it is not in the data.
+    modulus: z.array(modulusRow).superRefine(strictlyRising),
+    yield: z.array(yieldRow).superRefine(strictlyRising),
     densityKgM3: positive('Density'),
     maxContinuousC: num(),
     maxIntermittentC: num(),
@@ -38,14 +43,21 @@ export const alloyDataSchema = z.object({
       .optional(),
 });
 
+const nonNegative = () => num().nonnegative({ error: 'Cannot be negative' });
+
 export const flexPartSchema = z.object({
   id: z.string().min(1),
   name: z.string().min(1),
-  boreMm: positive('Bore'),
-  liveLengthMm: positive('Live length'),
-  ratedAxialCompressionMm: num().nonnegative({ error: 'Cannot be negative' }),
-  ratedAxialExtensionMm: num().nonnegative({ error: 'Cannot be negative' }),
-  lateralOffsetMm: num().nonnegative({ error: 'Cannot be negative' }),
+  purpose: z.enum(FLEX_PURPOSES, { error: 'Say what the part is for' }),
+  boreMm: atMost(positive('Bore'), BOUNDS.maxOdMm, 'Bore', 'mm'),
+  liveLengthMm: atMost(positive('Live length'), BOUNDS.maxSegmentMm, 'Live length', 'mm'),
+  overallLengthMm: positive('Overall length').nullable().optional(),
+  meanDiameterMm: positive('Mean diameter').nullable().optional(),
+  ratedAxialCompressionMm: nonNegative(),
+  ratedAxialExtensionMm: nonNegative(),
+  lateralOffsetMm: nonNegative(),
+  ratedAngularDeg: nonNegative().max(90, { error: 'At most 90°' }),
+  ratedCycles: nonNegative().int({ error: 'Enter a whole number' }).nullable(),
   maxTempC: num(),
   price: num().nonnegative({ error: 'Price cannot be negative' }),
 });
@@ -58,22 +70,26 @@ export const segmentSchema = z.object({
 
 export const tubeSchema = z
   .object({
-    odMm: positive('Outside diameter'),
-    wallMm: positive('Wall'),
+    odMm: atMost(positive('Outside diameter'), BOUNDS.maxOdMm, 'Outside diameter', 'mm'),
+    wallMm: atMost(positive('Wall'), BOUNDS.maxWallMm, 'Wall', 'mm'),
   })
   .refine((t) => t.wallMm < t.odMm / 2, { path: ['wallMm'], error: 'Wall must be less than half the outside diameter' });
 
 export const flexOptionsSchema = z.object({
-  movementMargin: num().min(1, { error: 'Margin must be at least 1' }).optional(),
-  parts: z.array(flexPartSchema).optional(),
+  partId: z.string().min(1, { error: 'Choose a part' }).optional(),
+  parts: z.array(flexPartSchema).max(200, { error: 'At most 200 parts' }).optional(),
   atMm: num().nonnegative({ error: 'Position cannot be negative' }).optional(),
+  lateralOffsetMm: atMost(nonNegative(), BOUNDS.maxLateralMm, 'Lateral offset', 'mm').optional(),
+  rotationDeg: atMost(nonNegative(), BOUNDS.maxRotationDeg, 'Rotation', '°').optional(),
+  perpendicularLeg: z.object({ lengthMm, tempC: temperature }).optional(),
+  heatCycles: atMost(nonNegative().int({ error: 'Enter a whole number' }), BOUNDS.maxHeatCycles, 'Heat cycles', 'cycles').optional(),
 });
 
 const slipMemberSchema = z
   .object({
     alloyId: z.string().min(1, { error: 'Choose an alloy' }).optional(),
     alloy: alloyDataSchema.optional(),
-    diameterMm: positive('Diameter').optional(),
+    diameterMm: atMost(positive('Diameter'), BOUNDS.maxOdMm, 'Diameter', 'mm').optional(),
     tempC: temperature,
   })
   .refine((m) => !(m.alloyId !== undefined && m.alloy !== undefined), {
@@ -84,10 +100,14 @@ const slipMemberSchema = z
 export const slipOptionsSchema = z.object({
   inner: slipMemberSchema,
   outer: slipMemberSchema,
-  coldClearanceMm: num().nonnegative({ error: 'Clearance cannot be negative' }),
-  coldEngagementMm: positive('Engagement'),
-  coldAxialGapMm: num().nonnegative({ error: 'Gap cannot be negative' }),
-  minEngagementMm: positive('Minimum engagement').optional(),
+  coldClearanceMm: atMost(num().nonnegative({ error: 'Clearance cannot be negative' }), BOUNDS.maxClearanceMm, 'Clearance', 'mm'),
+  coldEngagementMm: atMost(positive('Engagement'), BOUNDS.maxEngagementMm, 'Engagement', 'mm'),
+  coldAxialGapMm: atMost(num().nonnegative({ error: 'Gap cannot be negative' }), BOUNDS.maxGapMm, 'Gap', 'mm'),
+  minEngagementMm: atMost(positive('Minimum engagement'), BOUNDS.maxEngagementMm, 'Minimum engagement', 'mm').optional(),
+  toleranceMm: atMost(nonNegative(), BOUNDS.maxToleranceMm, 'Tolerance', 'mm').optional(),
+  scalePerSurfaceMm: atMost(nonNegative(), BOUNDS.maxScaleMm, 'Scale allowance', 'mm').optional(),
+  minRadialClearanceMm: atMost(nonNegative(), BOUNDS.maxRadialClearanceMm, 'Minimum clearance', 'mm').optional(),
+  maxRadialClearanceMm: atMost(positive('Maximum clearance'), BOUNDS.maxRadialClearanceMm, 'Maximum clearance', 'mm').optional(),
 });
 
 /** Body of POST /api/calc/run. Exactly one of alloyId and alloy. */
@@ -97,7 +117,10 @@ export const calcRunRequestSchema = z
     alloy: alloyDataSchema.optional(),
     tube: tubeSchema,
     installTempC: temperature,
-    segments: z.array(segmentSchema, { error: 'Add at least one segment' }).min(1, { error: 'Add at least one segment' }),
+    segments: z
+      .array(segmentSchema, { error: 'Add at least one segment' })
+      .min(1, { error: 'Add at least one segment' })
+      .max(50, { error: 'Use at most 50 segments' }),
     flex: flexOptionsSchema.optional(),
     slip: slipOptionsSchema.optional(),
   })
@@ -113,6 +136,9 @@ export const calcRunRequestSchema = z
       ctx.addIssue({ code: 'custom', path: ['flex', 'atMm'], message: 'Position must lie within the run' });
     }
     const slip = body.slip;
+    if (slip?.minRadialClearanceMm !== undefined && slip.maxRadialClearanceMm !== undefined && slip.maxRadialClearanceMm <= slip.minRadialClearanceMm) {
+      ctx.addIssue({ code: 'custom', path: ['slip', 'maxRadialClearanceMm'], message: 'The maximum must be above the minimum' });
+    }
     if (slip?.outer.diameterMm !== undefined) {
       const inner = slip.inner.diameterMm ?? body.tube.odMm;
       if (Math.abs(slip.outer.diameterMm - inner - slip.coldClearanceMm) > 0.005) {

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { FIXED_POINT_IDS } from '../jobs/fixed-points';
 import { runFieldPath, toCalcRequest } from '../jobs/run-input';
 import type { LimitStatus, RunResult } from '../engine/types';
+import type { StressFigure } from '../jobs/stress-figure';
 import { calcRunRequestSchema, flexOptionsSchema, segmentSchema, slipOptionsSchema, tubeSchema } from './calc';
 
 const text = (what: string, max: number) =>
@@ -60,11 +61,7 @@ export const jointSchema = z.discriminatedUnion(
   'type',
   [
     z.object({ type: z.literal('none') }),
-    z.object({
-      type: z.literal('flex'),
-      movementMargin: flexOptionsSchema.shape.movementMargin,
-      atMm: flexOptionsSchema.shape.atMm,
-    }),
+    flexOptionsSchema.omit({ parts: true }).extend({ type: z.literal('flex') }),
     slipOptionsSchema.extend({ type: z.literal('slip'), inner: slipMember, outer: slipMember }),
   ],
   { error: 'Choose none, flex or slip' },
@@ -180,15 +177,15 @@ export interface RunView extends RunFields {
 }
 
 export interface JobTotals {
-  /** Sums over the runs that have a result. */
+  /** Sums over the runs that have a result; a run without one is left out of every figure. */
   growthMm: number;
   massKg: number;
   /** null when the runs' prices are in different currencies. */
   materialCost: number | null;
   currency: string | null;
-  /** Sum of every run's segment lengths. */
+  /** Sum of the segment lengths of the runs with a result. */
   lengthMm: number;
-  /** Highest segment temperature of any run; null for a job with no runs. */
+  /** Highest temperature of any run with a result; null when none has one. */
   peakTempC: number | null;
   runCount: number;
   /** Runs left out of the growth, mass and cost sums because they have a problem. */
@@ -230,8 +227,8 @@ export interface CompareFigures {
   growthMm: number;
   limitStatus: LimitStatus;
   marginC: number;
-  stressRatio: number | null;
-  worstStressRatio: number | null;
+  /** The same restrained-stress figure the run page shows (stressFigure). */
+  stress: StressFigure;
   jointNeeded: boolean | null;
   massKg: number;
   materialCost: number;

@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { DEFAULT_DESIGN_BASIS } from '../engine/design-basis';
+import type { DesignBasis } from '../engine/types';
 import { ALLOY_FAMILIES, type AlloyFamily } from './alloy';
 
 const money = (what: string) => z.number({ error: `${what} must be a number` }).min(0, { error: `${what} cannot be negative` });
@@ -16,6 +18,18 @@ export const shopSettingsSchema = z.object({
   ),
   scrapAllowancePct: z.number({ error: 'Enter a percentage' }).min(0, { error: 'Cannot be negative' }).max(100, { error: 'At most 100 %' }),
   marginPct: z.number({ error: 'Enter a percentage' }).min(0, { error: 'Cannot be negative' }).max(300, { error: 'At most 300 %' }),
+  /** Share of a flex part's rated travel, or of a slip joint's gap, the computed movement may use. */
+  travelSharePct: z
+    .number({ error: 'Enter a percentage' })
+    .min(20, { error: 'At least 20 %' })
+    .max(100, { error: 'At most 100 %' })
+    .default(DEFAULT_DESIGN_BASIS.travelShare * 100),
+  /** Coldest ambient the shop's systems start from (winter start). */
+  coldestStartC: z
+    .number({ error: 'Enter a temperature' })
+    .min(-50, { error: 'At least −50 °C, the lowest the calculator handles' })
+    .max(40, { error: 'At most 40 °C' })
+    .default(DEFAULT_DESIGN_BASIS.coldestAmbientC),
   /** True while the values are the seeded demo numbers rather than the shop's own. */
   isDemo: z.boolean().default(false),
 });
@@ -37,5 +51,12 @@ export const DEMO_SHOP_SETTINGS: ShopSettings = {
   },
   scrapAllowancePct: 12,
   marginPct: 25,
+  travelSharePct: DEFAULT_DESIGN_BASIS.travelShare * 100,
+  coldestStartC: DEFAULT_DESIGN_BASIS.coldestAmbientC,
   isDemo: true,
 };
+
+/** The joint-design part of the shop settings, as the calculator takes it. */
+export function designBasisOf(settings: Pick<ShopSettings, 'travelSharePct' | 'coldestStartC'>): DesignBasis {
+  return { travelShare: settings.travelSharePct / 100, coldestAmbientC: settings.coldestStartC };
+}
