@@ -6,6 +6,7 @@ import type { FlexPartInput, FlexPartView } from '../../shared/schemas/alloy';
 import { formatQuantity, type UnitSystem } from '../../shared/units';
 import { formatTemp } from '../alloys/format';
 import { Fact } from '../ui/fact';
+import { FLEX_PURPOSE_LABELS } from '../../shared/schemas/alloy';
 import { Tag } from '../ui/tag';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
@@ -48,6 +49,7 @@ export function FlexPartCard({ part, units, onUpdate }: FlexPartCardProps) {
         </Text>
         <View style={styles.tags}>
           {part.isDemo ? <Tag label="demo" /> : null}
+          {part.purpose === 'thermal_bellows' ? null : <Tag label={FLEX_PURPOSE_LABELS[part.purpose]} tone="warning" />}
           {part.active ? null : <Tag label="Inactive" tone="danger" />}
         </View>
       </View>
@@ -70,6 +72,10 @@ export function FlexPartCard({ part, units, onUpdate }: FlexPartCardProps) {
           <Fact label="Rated compression" value={mm(part.ratedAxialCompressionMm)} />
           <Fact label="Rated extension" value={mm(part.ratedAxialExtensionMm)} />
           <Fact label="Lateral offset" value={mm(part.lateralOffsetMm)} />
+          <Fact label="Rated rotation" value={`${part.ratedAngularDeg}°`} />
+          <Fact label="Rated cycles" value={part.ratedCycles === null ? 'Not rated' : part.ratedCycles.toLocaleString('en-GB')} />
+          <Fact label="Mean diameter" value={part.meanDiameterMm === null ? 'Not given (estimated)' : mm(part.meanDiameterMm)} />
+          <Fact label="Overall length" value={mm(part.overallLengthMm ?? part.liveLengthMm)} />
           <Fact label="Maximum temperature" value={formatTemp(part.maxTempC, units)} />
           <Fact label="Price" value={`${part.price.toFixed(2)} ${part.currency}`} />
         </View>

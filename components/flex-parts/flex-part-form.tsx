@@ -5,7 +5,9 @@ import type { z } from 'zod';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import { messageOf } from '../../hooks/api-client';
-import { flexPartInputSchema, type FlexPartInput } from '../../shared/schemas/alloy';
+import { FLEX_PURPOSES } from '../../shared/engine/flex-purposes';
+import { FLEX_PURPOSE_LABELS, flexPartInputSchema, type FlexPartInput } from '../../shared/schemas/alloy';
+import { ChoicePicker } from '../ui/choice-picker';
 import { NumberField } from '../ui/number-field';
 import { placeServerErrors } from '../ui/server-errors';
 import { Button } from '../ui/button';
@@ -15,15 +17,22 @@ import { TextField } from '../ui/text-field';
 /** What the form holds: the schema's input, where `active` may be left out. */
 type Draft = z.input<typeof flexPartInputSchema>;
 
-const NUMBERS: { name: FieldPath<Draft>; label: string }[] = [
+/** `optional` fields may be left empty (saved as "not given"). */
+const NUMBERS: { name: FieldPath<Draft>; label: string; hint?: string; optional?: boolean }[] = [
   { name: 'boreMm', label: 'Bore (mm)' },
-  { name: 'liveLengthMm', label: 'Live length (mm)' },
+  { name: 'liveLengthMm', label: 'Live length (mm)', hint: 'The convoluted length' },
+  { name: 'overallLengthMm', label: 'Overall length (mm)', hint: 'Face to face; empty: the live length', optional: true },
+  { name: 'meanDiameterMm', label: 'Mean diameter (mm)', hint: 'Of the convolutions, from the maker’s drawing; empty: estimated as 1.15 × bore', optional: true },
   { name: 'ratedAxialCompressionMm', label: 'Rated compression (mm)' },
   { name: 'ratedAxialExtensionMm', label: 'Rated extension (mm)' },
   { name: 'lateralOffsetMm', label: 'Lateral offset (mm)' },
+  { name: 'ratedAngularDeg', label: 'Rated rotation (°)' },
+  { name: 'ratedCycles', label: 'Rated cycles', hint: 'At the rated movements; empty: not rated', optional: true },
   { name: 'maxTempC', label: 'Maximum temperature (°C)' },
   { name: 'price', label: 'Price' },
 ];
+
+const PURPOSE_OPTIONS = FLEX_PURPOSES.map((value) => ({ value, label: FLEX_PURPOSE_LABELS[value] }));
 
 export const EMPTY_FLEX_PART: Draft = {
   code: '',
@@ -33,6 +42,11 @@ export const EMPTY_FLEX_PART: Draft = {
   ratedAxialCompressionMm: Number.NaN,
   ratedAxialExtensionMm: Number.NaN,
   lateralOffsetMm: Number.NaN,
+  purpose: 'thermal_bellows',
+  overallLengthMm: null,
+  meanDiameterMm: null,
+  ratedAngularDeg: Number.NaN,
+  ratedCycles: null,
   maxTempC: Number.NaN,
   price: Number.NaN,
   currency: 'EUR',
@@ -88,8 +102,21 @@ export function FlexPartForm({ defaultValues, submitLabel, onSubmit, onCancel, c
           )}
         />
       ))}
+      <Controller
+        control={control}
+        name="purpose"
+        render={({ field }) => (
+          <ChoicePicker
+            label={`What the part is for${suffix}`}
+            choices={PURPOSE_OPTIONS}
+            value={field.value}
+            onChange={field.onChange}
+            error={errors.purpose?.message}
+          />
+        )}
+      />
       <View style={styles.grid}>
-        {NUMBERS.map(({ name, label }) => (
+        {NUMBERS.map(({ name, label, hint, optional }) => (
           <View key={name} style={styles.cell}>
             <Controller
               control={control}
@@ -98,8 +125,9 @@ export function FlexPartForm({ defaultValues, submitLabel, onSubmit, onCancel, c
                 <NumberField
                   ref={field.ref}
                   label={`${label}${suffix}`}
-                  value={field.value as number}
-                  onChange={field.onChange}
+                  value={(field.value as number | null) ?? Number.NaN}
+                  onChange={(v: number) => field.onChange(optional && Number.isNaN(v) ? null : v)}
+                  hint={hint}
                   onBlur={field.onBlur}
                   error={(errors as Record<string, { message?: string } | undefined>)[name]?.message}
                 />

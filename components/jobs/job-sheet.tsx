@@ -8,6 +8,10 @@ import { Text } from '../ui/text';
 import { show, showMoney } from '../units/format';
 import { runLength, runPeak } from './run-card';
 import { runVerdicts } from './run-verdict';
+import { cutLengths } from '../../shared/jobs/cut-lengths';
+import { stressFigure } from '../../shared/jobs/stress-figure';
+import { presetWords } from '../runs/flex-section';
+import { stressLine } from '../runs/restraint-words';
 
 function Row({ label, value }: { label: string; value: string }) {
   return (
@@ -26,12 +30,13 @@ function jointLine(run: RunView, units: UnitSystem): string {
   if (j.type === 'none') return 'None';
   if (j.type === 'flex') {
     const chosen = r?.flex?.chosen;
-    if (!chosen) return r?.flex?.noneFitsReason ?? 'Flex section: no part fits';
-    const at = j.atMm === undefined ? '' : `, ${show('length', j.atMm, units)} from the start`;
-    return `Flex section ${chosen.name}${at}; pre-set: stretch ${show('smallLength', chosen.presetMm, units)} cold`;
+    if (!chosen || !chosen.fits || chosen.presetMm === null) return r?.flex?.noneFitsReason ?? 'Flex section: no part fits';
+    const at = j.atMm === undefined ? '' : `, centred ${show('length', j.atMm, units)} from the start`;
+    return `Flex section ${chosen.name}${at}. ${presetWords(chosen.presetMm, units)}`;
   }
   const s = r?.slip;
-  const verdict = s ? (s.verdict === 'seizes' ? 'seizes hot' : s.bottomsOut ? 'bottoms out' : s.engagementOk ? 'slides hot' : 'engagement short when hot') : 'not worked out';
+  const failing = s?.checks.filter((c) => !c.ok).map((c) => c.message) ?? [];
+  const verdict = !s ? 'not worked out' : failing.length === 0 ? 'every check passes' : `needs changes: ${failing.join('; ')}`;
   return `Slip joint: engage ${show('length', j.coldEngagementMm, units)}, leave a ${show('length', j.coldAxialGapMm, units)} gap, clearance ${show(
     'smallLength',
     j.coldClearanceMm,
@@ -39,10 +44,16 @@ function jointLine(run: RunView, units: UnitSystem): string {
   )} on the diameter (${verdict})`;
 }
 
+function cutLine(run: RunView, units: UnitSystem): string {
+  const cut = cutLengths(runLength(run), run.joint, run.result);
+  const pieces = cut.pieces && cut.pieces.length > 1 ? `${cut.pieces.map((p) => show('length', p, units)).join(' + ')} = ` : '';
+  const note = cut.note ? ` (${cut.note})` : '';
+  return `${pieces}${show('length', cut.totalMm, units)}${note}`;
+}
+
 function SheetRun({ run, units }: { run: RunView; units: UnitSystem }) {
   const gauge = wallMmToGauge(run.tube.wallMm);
   const alloy = run.alloy ? `${run.alloy.designation}, UNS ${run.alloy.uns}, data version ${run.alloy.version}` : 'Unknown alloy';
-  const cuts = run.segments.map((s) => show('length', s.lengthMm, units)).join(' + ');
   const temps = run.segments.map((s) => `${show('temperature', s.startTempC, units)} → ${show('temperature', s.endTempC, units)}`).join('; ');
   return (
     <View style={styles.run} role="article" aria-label={`Run ${run.position}: ${run.name}`}>
@@ -51,11 +62,12 @@ function SheetRun({ run, units }: { run: RunView; units: UnitSystem }) {
       </Text>
       <Row label="Alloy" value={alloy} />
       <Row label="Tube" value={`${show('length', run.tube.odMm, units)} OD × ${show('smallLength', run.tube.wallMm, units)} wall${gauge === null ? '' : ` (${gauge} ga)`}`} />
-      <Row label="Cut lengths" value={run.segments.length > 1 ? `${cuts} = ${show('length', runLength(run), units)}` : cuts} />
+      <Row label="Tube to cut" value={cutLine(run, units)} />
       <Row label="Ends" value={`${fixedPointLabel(run.startFixing)} to ${fixedPointLabel(run.endFixing)}`} />
       <Row label="Temperatures" value={`install ${show('temperature', run.installTempC, units)}; ${temps}; peak ${show('temperature', runPeak(run), units)}`} />
       <Row label="Growth" value={run.result ? show('smallLength', run.result.growthMm, units) : (run.problem?.message ?? '—')} />
       <Row label="Joint" value={jointLine(run, units)} />
+      {run.result ? <Row label="Stress if nothing gave" value={stressLine(stressFigure(run.result.restraint), units)} /> : null}
       <Row label="Verdict" value={runVerdicts(run).map((v) => v.label).join(', ') || '—'} />
       {run.notes ? <Row label="Notes" value={run.notes} /> : null}
     </View>

@@ -27,20 +27,27 @@ export function jointVerdict(run: VerdictRun): Verdict | null {
   const r = run.result;
   if (!r) return null;
   if (run.joint.type === 'flex') {
-    if (r.flex?.chosen) return { label: `Flex sized: ${r.flex.chosen.name}`, tone: 'success' };
-    return { label: 'No flex part fits', tone: 'danger' };
+    const chosen = r.flex?.chosen;
+    if (chosen?.fits) {
+      const notForGrowth = chosen.warnings.some((w) => w.code === 'FLEX_NOT_FOR_GROWTH');
+      return notForGrowth ? { label: `Flex not meant for growth: ${chosen.name}`, tone: 'warning' } : { label: `Flex sized: ${chosen.name}`, tone: 'success' };
+    }
+    return { label: chosen ? 'Chosen flex does not fit' : 'No flex part fits', tone: 'danger' };
   }
   if (run.joint.type === 'slip') {
     const s = r.slip;
     if (!s) return null;
-    if (s.verdict === 'seizes') return { label: 'Slip joint seizes', tone: 'danger' };
+    const failed = (code: string) => s.checks.some((c) => c.code === code && !c.ok);
+    if (failed('hot_min_clearance') || failed('cold_min_clearance') || failed('assembles')) return { label: 'Slip joint may seize', tone: 'danger' };
     if (s.bottomsOut) return { label: 'Slip joint bottoms out', tone: 'danger' };
-    if (!s.engagementOk) return { label: 'Slip engagement too short', tone: 'warning' };
+    if (s.verdict === 'fails') return { label: 'Slip joint needs changes', tone: 'danger' };
     return { label: 'Slip joint sized', tone: 'success' };
   }
   if (!isRestrained(run.startFixing, run.endFixing, 'none')) return { label: 'An end takes the growth', tone: 'neutral' };
-  if (r.jointNeeded === true) return { label: 'Joint needed, none fitted', tone: 'danger' };
-  if (r.jointNeeded === false) return { label: 'No joint needed', tone: 'success' };
+  const verdict = r.restraint.verdict;
+  if (verdict === 'yields') return { label: 'Joint needed, none fitted', tone: 'danger' };
+  if (verdict === 'marginal') return { label: 'Joint advised: near yield', tone: 'warning' };
+  if (verdict === 'clear') return { label: 'No joint needed', tone: 'success' };
   return { label: 'Joint need not known', tone: 'neutral' };
 }
 

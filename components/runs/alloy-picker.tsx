@@ -15,6 +15,10 @@ import { FieldError } from '../ui/field-error';
 
 export interface AlloyPickerProps {
   value: string;
+  /** The picker's name; the list, search and buttons are named after it. Default "Alloy". */
+  label?: string;
+  /** When given, the picker may be left empty: this says what empty means, and a button clears it. */
+  emptyLabel?: string;
   /** The alloy's name as the run knows it, shown while the list is closed. */
   currentLabel: string | null;
   onChange: (alloyId: string) => void;
@@ -24,8 +28,14 @@ export interface AlloyPickerProps {
 }
 
 /** One published alloy from the catalogue, found by designation or UNS number. */
-export function AlloyPicker({ value, currentLabel, onChange, units, error, disabled = false }: AlloyPickerProps) {
-  const [open, setOpen] = useState(!value);
+export function AlloyPicker({ value, label: name = 'Alloy', emptyLabel, currentLabel, onChange, units, error, disabled = false }: AlloyPickerProps) {
+  const [open, setOpen] = useState(!value && !emptyLabel);
+  const main = name === 'Alloy';
+  const names = {
+    change: main ? 'Change alloy' : `Change ${name.toLowerCase()}`,
+    search: main ? 'Search alloys' : `Search for the ${name.toLowerCase()}`,
+    group: main ? 'Published alloys' : `Published alloys for the ${name.toLowerCase()}`,
+  };
   const [search, setSearch] = useState('');
   const alloys = useAlloysQuery({ search: search.trim() || undefined });
   const chosen = alloys.data?.items.find((a) => a.id === value);
@@ -33,25 +43,27 @@ export function AlloyPicker({ value, currentLabel, onChange, units, error, disab
 
   return (
     <View style={styles.wrapper}>
-      <Text variant="label">Alloy</Text>
+      <Text variant="label">{name}</Text>
       <View style={styles.current}>
         <Text variant="bodyStrong" style={styles.grow}>
-          {label ?? 'No alloy chosen'}
+          {value ? (label ?? 'No alloy chosen') : (emptyLabel ?? 'No alloy chosen')}
         </Text>
         {disabled ? null : (
           <Button
-            label={open ? 'Close the list' : 'Change alloy'}
+            label={open ? 'Close the list' : names.change}
+            accessibilityLabel={open ? (main ? 'Close the list' : `Close the list for the ${name.toLowerCase()}`) : names.change}
             variant="secondary"
             compact
             accessibilityState={{ expanded: open }}
             onPress={() => setOpen((o) => !o)}
           />
         )}
+        {!disabled && emptyLabel && value ? <Button label={emptyLabel} variant="secondary" compact onPress={() => onChange('')} /> : null}
       </View>
       <FieldError message={error} />
       {open && !disabled ? (
         <View style={styles.list}>
-          <TextField label="Search alloys" hint="Designation or UNS number" value={search} onChangeText={setSearch} autoCorrect={false} autoCapitalize="none" />
+          <TextField label={names.search} hint="Designation or UNS number" value={search} onChangeText={setSearch} autoCorrect={false} autoCapitalize="none" />
           {alloys.isPending ? (
             <LoadingState label="Loading alloys…" />
           ) : alloys.isError ? (
@@ -59,7 +71,7 @@ export function AlloyPicker({ value, currentLabel, onChange, units, error, disab
           ) : alloys.data.items.length === 0 ? (
             <Text tone="muted">No published alloy matches “{search}”.</Text>
           ) : (
-            <View accessibilityRole="radiogroup" accessibilityLabel="Published alloys" style={styles.options}>
+            <View accessibilityRole="radiogroup" accessibilityLabel={names.group} style={styles.options}>
               {alloys.data.items.map((a) => {
                 const selected = a.id === value;
                 const limit = Math.min(a.maxContinuousC, a.maxIntermittentC);

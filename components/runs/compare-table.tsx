@@ -7,7 +7,8 @@ import { LIMIT_VERDICTS } from '../jobs/run-verdict';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
-import { show, showMoney, showRatio, showSigned, showSignedMoney } from '../units/format';
+import { show, showMoney, showSigned, showSignedMoney } from '../units/format';
+import { stressShare } from './restraint-words';
 
 export interface CompareTableProps {
   current: CompareRow;
@@ -33,7 +34,7 @@ function cellsOf(row: CompareRow, units: UnitSystem): Cell[] {
     { label: 'Growth', value: show('smallLength', f.growthMm, units), difference: d ? showSigned('smallLength', d.growthMm, units) : undefined },
     { label: 'Limit', value: LIMIT_VERDICTS[f.limitStatus].label },
     { label: 'Margin', value: showSigned('temperatureDelta', f.marginC, units), difference: d ? showSigned('temperatureDelta', d.marginC, units) : undefined },
-    { label: 'Stress if held', value: showRatio(f.worstStressRatio ?? f.stressRatio) },
+    { label: 'Stress if held', value: stressShare(f.stress) },
     { label: 'Mass', value: show('mass', f.massKg, units), difference: d ? showSigned('mass', d.massKg, units) : undefined },
     {
       label: 'Material cost',

@@ -136,7 +136,7 @@ export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabe
           control={control}
           name="joint"
           render={({ field: { value, onChange } }) => (
-            <JointFields value={value} onChange={onChange} peakC={peakC} units={units} errors={messages} disabled={!editable} />
+            <JointFields value={value} onChange={onChange} peakC={peakC} tubeOdMm={values.tube.odMm} units={units} errors={messages} disabled={!editable} />
           )}
         />
       </Section>

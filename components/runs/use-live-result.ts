@@ -1,12 +1,14 @@
 import { useEffect, useMemo, useState } from 'react';
 import { useAlloyQuery } from '../../hooks/use-alloys';
 import { useFlexPartsQuery } from '../../hooks/use-flex-parts';
+import { useShopSettingsQuery } from '../../hooks/use-shop-settings';
+import { designBasisOf } from '../../shared/schemas/shop-settings';
 import { toAlloyData } from '../../shared/catalogue/to-alloy-data';
 import { calculateRun } from '../../shared/engine/calculate-run';
 import { isEngineInputError } from '../../shared/engine/errors';
-import type { FlexPart, RunResult } from '../../shared/engine/types';
+import type { RunResult } from '../../shared/engine/types';
+import { toSizingPart } from '../../shared/catalogue/flex-sizing-part';
 import { runFields, toCalcRequest } from '../../shared/jobs/run-input';
-import type { FlexPartView } from '../../shared/schemas/alloy';
 import { runFieldsSchema, type AlloyUsed, type RunFields } from '../../shared/schemas/jobs';
 import type { FieldMessages } from './field-errors';
 
@@ -32,19 +34,6 @@ export type LiveResult =
   | { state: 'outside'; message: string; fields: FieldMessages; alloy: AlloyUsed }
   | { state: 'ok'; result: RunResult; alloy: AlloyUsed; currency: string };
 
-/** The catalogue's flex parts as the server's sizing reads them. */
-const toFlexPart = (p: FlexPartView): FlexPart => ({
-  id: p.id,
-  name: `${p.code} ${p.name}`,
-  boreMm: p.boreMm,
-  liveLengthMm: p.liveLengthMm,
-  ratedAxialCompressionMm: p.ratedAxialCompressionMm,
-  ratedAxialExtensionMm: p.ratedAxialExtensionMm,
-  lateralOffsetMm: p.lateralOffsetMm,
-  maxTempC: p.maxTempC,
-  price: p.price,
-});
-
 /** The run computed in the browser by the shared engine from the published data, as the server will on save. */
 export function useLiveResult(fields: RunFields): LiveResult {
   const key = JSON.stringify(fields);
@@ -56,6 +45,7 @@ export function useLiveResult(fields: RunFields): LiveResult {
   const inner = useAlloyQuery(slip?.inner.alloyId);
   const outer = useAlloyQuery(slip?.outer.alloyId);
   const flex = useFlexPartsQuery(false);
+  const settings = useShopSettingsQuery();
 
   return useMemo((): LiveResult => {
     if (!parsed.success) {
@@ -68,6 +58,7 @@ export function useLiveResult(fields: RunFields): LiveResult {
     }
     if (alloy.isPending || (slip?.inner.alloyId && inner.isPending) || (slip?.outer.alloyId && outer.isPending)) return { state: 'loading' };
     if (fields.joint.type === 'flex' && flex.isPending) return { state: 'loading' };
+    if (fields.joint.type !== 'none' && settings.isPending) return { state: 'loading' };
     const published = alloy.data?.published;
     if (!published || alloy.data?.status !== 'published') {
       return { state: 'unavailable', message: alloy.isError ? 'The alloy’s data did not load.' : 'This alloy has no published data to compute with.' };
@@ -75,9 +66,10 @@ export function useLiveResult(fields: RunFields): LiveResult {
     const used: AlloyUsed = { id: alloy.data.id, designation: published.designation, uns: published.uns, version: published.version, status: 'published' };
     const member = (q: typeof inner) => (q.data?.published ? toAlloyData(q.data.published) : undefined);
     try {
-      const result = calculateRun(toCalcRequest(parsed.data), toAlloyData(published), {
-        flexParts: (flex.data ?? []).map(toFlexPart),
+      const result = calculateRun(toCalcRequest(parsed.data), toAlloyData(published, alloy.data.sources), {
+        flexParts: (flex.data ?? []).map(toSizingPart),
         slipAlloys: { inner: member(inner), outer: member(outer) },
+        design: settings.data ? designBasisOf(settings.data) : undefined,
       });
       return { state: 'ok', result, alloy: used, currency: published.currency };
     } catch (error) {
@@ -87,5 +79,5 @@ export function useLiveResult(fields: RunFields): LiveResult {
       return { state: 'outside', message: `The published data of ${used.designation}, version ${used.version}, does not cover this run: ${first}.`, fields: mapped, alloy: used };
     }
     // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [parsed, alloy.isPending, alloy.data, alloy.isError, inner.isPending, inner.data, outer.isPending, outer.data, flex.isPending, flex.data]);
+  }, [parsed, alloy.isPending, alloy.data, alloy.isError, inner.isPending, inner.data, outer.isPending, outer.data, flex.isPending, flex.data, settings.isPending, settings.data]);
 }

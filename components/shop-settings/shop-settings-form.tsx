@@ -15,7 +15,7 @@ import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 
 type Values = z.input<typeof shopSettingsSchema>;
-type NumberPath = 'labourRatePerHour' | 'hoursPerRun' | 'scrapAllowancePct' | 'marginPct' | `weldTimeFactors.${(typeof ALLOY_FAMILIES)[number]}`;
+type NumberPath = 'labourRatePerHour' | 'hoursPerRun' | 'scrapAllowancePct' | 'marginPct' | 'travelSharePct' | 'coldestStartC' | `weldTimeFactors.${(typeof ALLOY_FAMILIES)[number]}`;
 
 export interface ShopSettingsFormProps {
   defaultValues: ShopSettings;
@@ -99,6 +99,28 @@ export function ShopSettingsForm({ defaultValues, onSubmit }: ShopSettingsFormPr
         </Text>
         <NumberInput control={control} name="scrapAllowancePct" label="Scrap allowance (%)" hint="Added to the material cost for offcuts and test pieces" error={errors.scrapAllowancePct?.message} />
         <NumberInput control={control} name="marginPct" label="Margin (%)" hint="On material and labour together" error={errors.marginPct?.message} />
+      </Card>
+      <Card>
+        <Text variant="heading" headingLevel={2}>
+          Joint design
+        </Text>
+        <Text variant="caption" tone="muted">
+          Every flex and slip joint in every job is sized on these two figures. The defaults are common practice, with no published source behind them; the part maker’s ratings and your engineer’s rules come first.
+        </Text>
+        <NumberInput
+          control={control}
+          name="travelSharePct"
+          label="Share of rated travel a joint may use (%)"
+          hint="Computed movement against a flex part’s ratings or a slip joint’s gap; 70 % by default"
+          error={errors.travelSharePct?.message}
+        />
+        <NumberInput
+          control={control}
+          name="coldestStartC"
+          label="Coldest start (°C)"
+          hint="The coldest ambient a system starts from; joints are checked from here to the hottest running state"
+          error={errors.coldestStartC?.message}
+        />
       </Card>
       {failure ? <ErrorBanner title="The settings were not saved" message={failure} /> : null}
       {saved ? (

@@ -20,8 +20,6 @@ export function inputText(kind: QuantityKind, si: number, units: UnitSystem): st
   return String(Number(shown.toFixed(units === 'metric' ? 3 : 4)));
 }
 
-export const showRatio = (ratio: number | null) => (ratio === null ? 'not known' : `${(ratio * 100).toFixed(0)} % of yield`);
-
 export function showMoney(amount: number | null, currency: string | null): string {
   if (amount === null || currency === null) return '—';
   return `${amount.toFixed(2)} ${currency}`;
