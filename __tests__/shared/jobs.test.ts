@@ -89,6 +89,7 @@ describe('job totals', () => {
       massKg: 5,
       materialCost: 29,
       currency: 'EUR',
+      costNote: null,
       lengthMm: 2000,
       peakTempC: 950,
       runCount: 3,
@@ -103,6 +104,7 @@ describe('job totals', () => {
     ]);
     expect(totals.materialCost).toBeNull();
     expect(totals.currency).toBeNull();
+    expect(totals.costNote).toMatch(/EUR and USD.*not added up/);
     expect(totals.growthMm).toBe(12);
   });
 

@@ -173,7 +173,7 @@ export interface RunView extends RunFields {
   /** Computed on every read from the latest published data of the alloy; null when `problem` is set. */
   result: RunResult | null;
   problem: RunProblem | null;
-  /** Currency of materialCost (the alloy's price currency). */
+  /** Currency of materialCost: the shop's, or the alloy's price currency when no rate converts it. */
   currency: string | null;
   createdAt: string;
   updatedAt: string;
@@ -186,6 +186,8 @@ export interface JobTotals {
   /** null when the runs' prices are in different currencies. */
   materialCost: number | null;
   currency: string | null;
+  /** Why there is no material cost total: the runs' costs are in different currencies (no rate set to convert them). */
+  costNote: string | null;
   /** Sum of every run's segment lengths. */
   lengthMm: number;
   /** Highest segment temperature of any run; null for a job with no runs. */
