@@ -31,6 +31,17 @@ describe('catalogue CSV', () => {
     expect(rows.every((r) => r.source.length > 0)).toBe(true);
   });
 
+  it('when exported, then values from memory say "to be verified" on their rows, and lowered limits carry the alloy\'s cautions', async () => {
+    const rows = await exportCsv();
+    const of = (uns: string, property: string, temp: string) => rows.find((r) => r.uns === uns && r.property === property && r.temp_c === temp)!;
+    // 304/304L: the EN 1.4307 elevated minimums are recalled (a memory source); its Annex C expansion is read from the standard.
+    expect(of('S30400', 'yield_mpa', '300').to_be_verified).toBe('value');
+    expect(of('S30400', 'cte_mean_um_per_m_k', '300').to_be_verified).toBe('');
+    // 409: every value read from its sheet, but the service limits are from memory, on every row of the alloy.
+    expect(rows.filter((r) => r.uns === 'S40910').every((r) => r.to_be_verified === 'service limits')).toBe(true);
+    expect(of('S40910', 'cte_mean_um_per_m_k', '500').data_cautions).toMatch(/Usable limit lowered to 450 °C/);
+  });
+
   it('when the export is imported unchanged, then nothing is drafted', async () => {
     const eng = await signedIn(t.app, 'engineer');
     const csv = (await (await signedIn(t.app, 'fabricator')).get('/api/alloys/export.csv')).text;
