@@ -37,8 +37,9 @@ it('when a fabricator opens Type 409 on a phone, then its data cautions say the 
   await page.getByRole('heading', { name: 'Fabricator home' }).waitFor();
   await page.goto('/alloys');
   await page.getByRole('link', { name: 'Type 409', exact: true }).click();
-  await page.getByText(/Usable limit lowered to 450 °C/).waitFor();
-  await page.getByText('service limits').first().waitFor();
+  const cautions = page.getByRole('note', { name: 'Data cautions' });
+  await cautions.getByText(/Usable limit lowered to 450 °C/).waitFor();
+  await cautions.getByText('service limits', { exact: true }).waitFor();
   await screenshot(page, 'currency-rates-2-alloy-cautions-phone');
   expect(pageErrors(page)).toEqual([]);
   await context.close();
