@@ -38,6 +38,9 @@ import { publicQuotesRouter, quotesRouter } from './quotes/quotes.router';
 import { QuotesService } from './quotes/quotes.service';
 import { shopSettingsRouter } from './settings/shop-settings.router';
 import { ShopSettingsService } from './settings/shop-settings.service';
+import { CurrencyRatesRepository } from './currency/currency-rates.repository';
+import { currencyRatesRouter } from './currency/currency-rates.router';
+import { CurrencyRatesService } from './currency/currency-rates.service';
 
 export interface AppOptions {
   /** Where uploaded data sheets are kept. */
@@ -92,8 +95,10 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.use('/calc', calcRouter(new CalcService(catalogueService, flexPartsService, shopSettings)));
   api.use('/flex-parts', flexPartsRouter(flexPartsService));
   api.use(datasheetsRouter(datasheetsService, options.uploadsDir));
-  api.use(jobsRouter(new JobsService(new JobsStore(dataSource), new RunResults(catalogueService, flexPartsService, shopSettings))));
-  const quotes = new QuotesService(new QuotesStore(dataSource), new JobsStore(dataSource), catalogueService, shopSettings, usersRepository, options.mailer);
+  const currencyRates = new CurrencyRatesService(new CurrencyRatesRepository(dataSource), shopSettings);
+  api.use(jobsRouter(new JobsService(new JobsStore(dataSource), new RunResults(catalogueService, flexPartsService, shopSettings, currencyRates))));
+  const quotes = new QuotesService(new QuotesStore(dataSource), new JobsStore(dataSource), catalogueService, shopSettings, usersRepository, options.mailer, currencyRates);
+  api.use('/currency-rates', currencyRatesRouter(currencyRates));
   api.use('/settings', shopSettingsRouter(shopSettings));
   api.use('/quotes', quotesRouter(quotes, options.publicUrl));
   api.use('/public', publicQuotesRouter(quotes, options.publicUrl));

@@ -156,7 +156,7 @@ describe('the alloy catalogue', () => {
     const page = await signedIn('sales@dilato.test', DESKTOP);
     await page.goto('/alloys');
     const picks = ['Type 321', 'Alloy 625', 'Type 409'];
-    for (const name of picks) await page.getByRole('checkbox', { name: `Compare ${name}` }).click();
+    for (const name of picks) await page.getByRole('checkbox', { name: `Compare ${name}`, exact: true }).click();
     await page.getByRole('button', { name: 'Compare selected alloys' }).click();
     await page.getByRole('heading', { name: 'Compare alloys' }).waitFor();
     const table = page.getByRole('table', { name: 'Comparison' });

@@ -135,30 +135,30 @@ async function fabricatorWorkspace(size: 'phone' | 'desktop', viewport: { width:
   await page.getByRole('img', { name: /^Growth along the run\./ }).scrollIntoViewIfNeeded();
   await shot('4-imperial');
 
-  // --- compare three alloys and adopt one ---
+  // --- compare three alloys and adopt one (Alloy 601: its data reach this downpipe's 900 °C) ---
   await page.getByRole('link', { name: 'Compare alloys for this run', exact: true }).click();
   await page.getByRole('heading', { name: 'Compare alloys for Downpipe', level: 1 }).waitFor();
-  for (const designation of ['Type 304/304L', 'Type 309S', 'Alloy 625']) {
+  for (const designation of ['Type 304/304L', 'Alloy 601', 'Alloy 625']) {
     await page.getByRole('checkbox', { name: `Compare ${designation}`, exact: true }).click();
   }
   const compared = page.getByRole(size === 'phone' ? 'list' : 'table', { name: 'Alloys compared' });
-  await compared.getByText('Type 309S (S30908)', { exact: true }).waitFor();
+  await compared.getByText('Alloy 601 (N06601)', { exact: true }).waitFor();
   await compared.getByText('Current alloy', { exact: true }).waitFor();
   expect(await compared.innerText()).toContain(' in');
   await compared.scrollIntoViewIfNeeded();
   await shot('5-compare');
-  await page.getByRole('button', { name: 'Use Type 309S', exact: true }).click();
-  await page.getByText('Type 309S is now the alloy of Downpipe.', { exact: true }).waitFor();
+  await page.getByRole('button', { name: 'Use Alloy 601', exact: true }).click();
+  await page.getByText('Alloy 601 is now the alloy of Downpipe.', { exact: true }).waitFor();
   // The adopted alloy is now the current row, and the old one is among the candidates.
   await page.getByRole('button', { name: 'Use Type 321', exact: true }).waitFor();
-  expect(await page.getByRole('button', { name: 'Use Type 309S', exact: true }).count()).toBe(0);
-  await page.getByText('Type 309S is now the alloy of Downpipe.', { exact: true }).scrollIntoViewIfNeeded();
+  expect(await page.getByRole('button', { name: 'Use Alloy 601', exact: true }).count()).toBe(0);
+  await page.getByText('Alloy 601 is now the alloy of Downpipe.', { exact: true }).scrollIntoViewIfNeeded();
   await shot('6-adopted');
 
   await page.goto('/jobs');
   await page.getByRole('link', { name: jobName, exact: true }).click();
   await page.getByRole('heading', { name: jobName, level: 1 }).waitFor();
-  expect(await runs.nth(0).innerText()).toContain('Type 309S (S30908)');
+  expect(await runs.nth(0).innerText()).toContain('Alloy 601 (N06601)');
 
   // --- the job sheet ---
   await page.getByRole('link', { name: 'Open the job sheet', exact: true }).click();
@@ -166,7 +166,7 @@ async function fabricatorWorkspace(size: 'phone' | 'desktop', viewport: { width:
   const sheetRuns = page.getByRole('article');
   expect(await sheetRuns.count()).toBe(3);
   const first = await sheetRuns.nth(0).innerText();
-  expect(first).toContain('Type 309S, UNS S30908, data version');
+  expect(first).toContain('Alloy 601, UNS N06601, data version');
   expect(first).toMatch(/Growth\s+\d+\.\d\d\d in/);
   await page.getByText('Guidance only.', { exact: false }).first().waitFor();
   await shot('7-job-sheet');

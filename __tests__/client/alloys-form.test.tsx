@@ -30,6 +30,7 @@ const type321: AlloyInput = {
   priceIsDemo: true,
   referenceTempC: 20,
   notes: '',
+  dataCautions: '',
   warningRanges: [],
   cte: [
     { tempC: 100, meanUmPerMK: 16.6, sourceId: 'src-1' },

@@ -66,9 +66,8 @@ describe('POST /api/calc/run', () => {
     const id = await publishedId('S32100');
     const res = await fab.post('/api/calc/run').send(body({ alloy: undefined, alloyId: id, segments: [{ lengthMm: 1000, startTempC: 600, endTempC: 600 }] }));
     expect(res.status).toBe(200);
-    // 321: mean 18.9e-6/K from 20 to 600 °C (the seed's cited supplier table, reference-data §1.4):
-    // 1000 mm × 18.9e-6 × 580 K = 10.962 mm.
-    expect(res.body.growthMm).toBeCloseTo(10.962, 2);
+    // 321 on EN 1993-1-2 Annex C: Δl/l from 20 to 600 °C = 10.68738e-3 (reference-data §1.1), so 1000 mm grows 10.687 mm.
+    expect(res.body.growthMm).toBeCloseTo(10.687, 2);
     expect(res.body.alloy).toMatchObject({ id, uns: 'S32100', designation: 'Type 321', version: 1 });
   });
 

@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import { CSV_COLUMNS } from '../../shared/catalogue/catalogue-csv';
+import { CSV_COLUMNS, CSV_EXPORT_ONLY_COLUMNS } from '../../shared/catalogue/catalogue-csv';
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import { createTestApp, expectErrorShape, signedIn, type TestApp } from './test-app';
 
@@ -20,14 +20,26 @@ async function exportCsv(): Promise<Record<string, string>[]> {
 describe('catalogue CSV', () => {
   it('when exported, then every published property point is one row naming its source', async () => {
     const rows = await exportCsv();
-    expect(Object.keys(rows[0])).toEqual([...CSV_COLUMNS]);
+    expect(Object.keys(rows[0])).toEqual([...CSV_COLUMNS, ...CSV_EXPORT_ONLY_COLUMNS]);
     const fab = await signedIn(t.app, 'fabricator');
     const list = (await fab.get('/api/alloys')).body.items as AlloySummary[];
     expect(new Set(rows.map((r) => r.uns)).size).toBe(list.length);
     const s321 = rows.filter((r) => r.uns === 'S32100' && r.property === 'cte_mean_um_per_m_k');
-    // 321: 16.6 / 18.9 / 20.5 µm/m·K at 100 / 600 / 1000 °C, from the seed's cited supplier table (reference-data §1.4).
-    expect(s321.map((r) => [Number(r.temp_c), Number(r.value)])).toEqual([[100, 16.6], [600, 18.9], [1000, 20.5]]);
+    // 321: EN 1993-1-2 Annex C every 50 °C; at 600 °C (Δl/l)/(θ − 20) = 10.68738e-3 / 580 = 18.427 µm/m·K (reference-data §1.1).
+    expect(s321).toHaveLength(20);
+    expect(Number(s321.find((r) => r.temp_c === '600')!.value)).toBeCloseTo(18.427, 3);
     expect(rows.every((r) => r.source.length > 0)).toBe(true);
+  });
+
+  it('when exported, then values from memory say "to be verified" on their rows, and lowered limits carry the alloy\'s cautions', async () => {
+    const rows = await exportCsv();
+    const of = (uns: string, property: string, temp: string) => rows.find((r) => r.uns === uns && r.property === property && r.temp_c === temp)!;
+    // 304/304L: the EN 1.4307 elevated minimums are recalled (a memory source); its Annex C expansion is read from the standard.
+    expect(of('S30400', 'yield_mpa', '300').to_be_verified).toBe('value');
+    expect(of('S30400', 'cte_mean_um_per_m_k', '300').to_be_verified).toBe('');
+    // 409: every value read from its sheet, but the service limits are from memory, on every row of the alloy.
+    expect(rows.filter((r) => r.uns === 'S40910').every((r) => r.to_be_verified === 'service limits')).toBe(true);
+    expect(of('S40910', 'cte_mean_um_per_m_k', '500').data_cautions).toMatch(/Usable limit lowered to 450 °C/);
   });
 
   it('when the export is imported unchanged, then nothing is drafted', async () => {
@@ -44,8 +56,8 @@ describe('catalogue CSV', () => {
   it('when rows are good, bad, or contradict each other, then good alloys become drafts and each bad row is reported by line', async () => {
     const rows = await exportCsv();
     const pick = (uns: string) => rows.filter((r) => r.uns === uns).map((r) => ({ ...r }));
-    const changed = pick('S34700').map((r) => (r.property === 'cte_mean_um_per_m_k' && r.temp_c === '600' ? { ...r, value: '18.8' } : r));
-    const fresh = pick('S32100').map((r) => ({ ...r, uns: 'S32109', designation: 'Type 321H' }));
+    const changed = pick('S34700').map((r) => (r.property === 'cte_mean_um_per_m_k' && r.temp_c === '600' ? { ...r, value: '18.5' } : r));
+    const fresh = pick('S32100').map((r) => ({ ...r, uns: 'S34709', designation: 'Type 347H' }));
     const badSource = pick('S30400').map((r, i) => (i === 0 ? { ...r, source: 'no-such-source' } : r));
     const badValue = pick('S43000').map((r, i) => (i === 1 ? { ...r, value: 'hot' } : r));
     const contradicting = pick('S40910').map((r, i) => (i === 2 ? { ...r, density_kg_m3: '1' } : r));
@@ -56,7 +68,7 @@ describe('catalogue CSV', () => {
     const res = await eng.post('/api/alloys/import').set('Content-Type', 'text/csv').send(csv);
     expect(res.status).toBe(200);
     expect(res.body.updated).toEqual(['S34700']);
-    expect(res.body.created).toEqual(['S32109']);
+    expect(res.body.created).toEqual(['S34709']);
     const refusedUns = res.body.refused.map((r: { uns: string }) => r.uns);
     expect(refusedUns).toEqual(expect.arrayContaining(['S30400', 'S43000', 'S40910']));
     const sourceLine = changed.length + fresh.length + 2; // header is line 1
@@ -66,9 +78,9 @@ describe('catalogue CSV', () => {
     const fab = await signedIn(t.app, 'fabricator');
     const s347 = (await fab.get('/api/alloys').query({ search: 'S34700' })).body.items[0];
     const detail = (await eng.get(`/api/alloys/${s347.id}`)).body.alloy;
-    expect(detail.published.cte.find((p: { tempC: number }) => p.tempC === 600).meanUmPerMK).toBe(18.9);
-    expect(detail.draft.cte.find((p: { tempC: number }) => p.tempC === 600).meanUmPerMK).toBe(18.8);
-    expect((await fab.get('/api/alloys').query({ search: 'S32109' })).body.total).toBe(0);
+    expect(detail.published.cte.find((p: { tempC: number }) => p.tempC === 600).meanUmPerMK).toBe(18.427);
+    expect(detail.draft.cte.find((p: { tempC: number }) => p.tempC === 600).meanUmPerMK).toBe(18.5);
+    expect((await fab.get('/api/alloys').query({ search: 'S34709' })).body.total).toBe(0);
   });
 
   it('when columns are missing, then 400 names them; fabricators may not import', async () => {

@@ -35,8 +35,8 @@ describe('GET /api/runs/:id/compare', () => {
 
     expect(view.candidates.map((c) => c.alloy!.uns)).toEqual(['S32100', 'N06625', 'S40910']);
     const [c321, c625] = view.candidates;
-    // 321 at 600 °C with 18.9e-6/K: 10.962 mm (reference-data §5).
-    expect(c321.figures!.growthMm).toBeCloseTo(10.962, 2);
+    // 321 at 600 °C on EN 1993-1-2 Annex C: 10.687 mm per metre (reference-data §1.1).
+    expect(c321.figures!.growthMm).toBeCloseTo(10.687, 2);
     for (const c of [c321, c625] as CompareRow[]) {
       const f = c.figures!;
       const base = view.current.figures!;

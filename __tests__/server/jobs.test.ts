@@ -116,12 +116,12 @@ describe('jobs', () => {
 });
 
 describe('run results', () => {
-  it('when 1 m of Type 321 runs at 600 °C, then it grows 10.962 mm with the published version named (reference-data §5)', async () => {
+  it('when 1 m of Type 321 runs at 600 °C, then it grows 10.687 mm with the published version named (EN 1993-1-2 Annex C, reference-data §1.1)', async () => {
     const fab = await signedIn(t.app, 'fabricator');
     const job = await newJob(fab);
     const run = await newRun(fab, job.id, runBody(s321, 600));
-    // 321: mean 18.9e-6/K from 20 to 600 °C (cited supplier table, reference-data §1.4): 1000 × 18.9e-6 × 580 = 10.962 mm.
-    expect(run.result!.growthMm).toBeCloseTo(10.962, 2);
+    // 321 on EN 1993-1-2 Annex C: Δl/l from 20 to 600 °C = 10.68738e-3 (reference-data §1.1): 10.687 mm.
+    expect(run.result!.growthMm).toBeCloseTo(10.687, 2);
     expect(run.alloy).toEqual({ id: s321, designation: 'Type 321', uns: 'S32100', version: 1, status: 'published' });
     expect(run.problem).toBeNull();
     expect(run.currency).toBe('EUR');
@@ -145,8 +145,8 @@ describe('run results', () => {
     const run = await newRun(fab, job.id, runBody(s321, 600));
     const patched = await fab.patch(`/api/runs/${run.id}`).send({ segments: [{ lengthMm: 1000, startTempC: 1000, endTempC: 1000 }] });
     expect(patched.status).toBe(200);
-    // 321 from 20 to 1000 °C with 20.5e-6/K (reference-data §5): 20.09 mm.
-    expect(patched.body.run.result.growthMm).toBeCloseTo(20.09, 2);
+    // 321 from 20 to 1000 °C on EN 1993-1-2 Annex C: Δl/l = 19.15606e-3 (reference-data §1.1): 19.156 mm.
+    expect(patched.body.run.result.growthMm).toBeCloseTo(19.156, 2);
     const read = (await fab.get(`/api/runs/${run.id}`)).body.run as RunView;
     expect(read.result!.growthMm).toBe(patched.body.run.result.growthMm);
     expect((await jobDetail(fab, job.id)).totals.growthMm).toBe(read.result!.growthMm);

@@ -90,6 +90,7 @@ describe('job totals', () => {
       massKg: 5,
       materialCost: 29,
       currency: 'EUR',
+      costNote: null,
       lengthMm: 1000,
       peakTempC: 900,
       runCount: 3,
@@ -104,6 +105,7 @@ describe('job totals', () => {
     ]);
     expect(totals.materialCost).toBeNull();
     expect(totals.currency).toBeNull();
+    expect(totals.costNote).toMatch(/EUR and USD.*not added up/);
     expect(totals.growthMm).toBe(12);
   });
 

@@ -26,6 +26,7 @@ export function emptyAlloy(): AlloyInputDraft {
     priceIsDemo: false,
     referenceTempC: 20,
     notes: '',
+    dataCautions: '',
     warningRanges: [],
     cte: [
       { tempC: 100, meanUmPerMK: Number.NaN, sourceId: '' },

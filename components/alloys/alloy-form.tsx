@@ -200,6 +200,23 @@ export function AlloyForm({ defaultValues, sources, onCreateSource, onSubmit, su
             />
           )}
         />
+        <Controller
+          control={control}
+          name="dataCautions"
+          render={({ field }) => (
+            <TextField
+              ref={field.ref}
+              label="Data cautions"
+              value={field.value ?? ''}
+              onChangeText={field.onChange}
+              onBlur={field.onBlur}
+              error={errorAt(errors, 'dataCautions')}
+              hint="What a user must know about these numbers: a limit lowered to the data's reach, values still to be verified. Shown at the top of the alloy."
+              multiline
+              numberOfLines={3}
+            />
+          )}
+        />
         <WarningRangesField control={control} errors={errors} units={units} />
       </Card>
 

@@ -7,6 +7,7 @@ import { formatCte, formatDensity, formatModulus, formatPrice, formatStress, for
 import { Fact } from '../ui/fact';
 import { Cite, type SourceIndex } from './source-citation';
 import { Tag } from '../ui/tag';
+import { toBeVerified } from '../../shared/catalogue/to-be-verified';
 
 export interface AlloyPropertiesProps {
   version: AlloyVersionView;
@@ -16,8 +17,24 @@ export interface AlloyPropertiesProps {
 
 /** Every property of one version, each beside the source it cites. */
 export function AlloyProperties({ version: v, index, units }: AlloyPropertiesProps) {
+  const unverified = toBeVerified(v, (id) => index.get(id)?.source.kind === 'memory');
   return (
     <View style={styles.wrapper}>
+      {v.dataCautions || unverified.length > 0 ? (
+        <View role="note" aria-label="Data cautions" style={[styles.block, styles.cautions]}>
+          <Text variant="heading" headingLevel={3}>
+            Data cautions
+          </Text>
+          {v.dataCautions ? <Text selectable>{v.dataCautions}</Text> : null}
+          {unverified.length > 0 ? (
+            <View style={styles.inline}>
+              <Tag label="To be verified" tone="warning" />
+              <Text>{unverified.join('; ')}</Text>
+            </View>
+          ) : null}
+        </View>
+      ) : null}
+
       <View style={styles.grid}>
         <Fact large label="Density" value={formatDensity(v.densityKgM3, units)}>
           <Cite sourceId={v.densitySourceId} index={index} />
@@ -136,6 +153,7 @@ const styles = StyleSheet.create({
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.lg },
   inline: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: spacing.xs },
   block: { gap: spacing.sm },
+  cautions: { padding: spacing.md, borderLeftWidth: 3, borderLeftColor: colors.warning, backgroundColor: colors.warningSoft },
   warning: { gap: spacing.xxs, paddingLeft: spacing.md, borderLeftWidth: 3, borderLeftColor: colors.warning },
   table: { borderTopWidth: 1, borderTopColor: colors.border },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm, paddingVertical: spacing.sm, borderBottomWidth: 1, borderBottomColor: colors.border },

@@ -36,6 +36,7 @@ const LABELS: Record<string, string> = {
   priceIsDemo: 'Demo price',
   referenceTempC: 'Reference temperature of the mean CTE',
   notes: 'Notes',
+  dataCautions: 'Data cautions',
   warningRanges: 'Warning ranges',
   status: 'Status',
   datasheets: 'Data sheets',

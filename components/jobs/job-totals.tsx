@@ -22,6 +22,7 @@ export function JobTotalsCard({ totals, units }: { totals: JobTotals; units: Uni
         <Fact label="Material cost" value={showMoney(totals.materialCost, totals.currency)} />
         <Fact label="Runs" value={String(totals.runCount)} />
       </View>
+      {totals.costNote ? <Text tone="warning">{totals.costNote}</Text> : null}
       {totals.runsWithProblems > 0 ? (
         <Text tone="danger">
           {totals.runsWithProblems} {totals.runsWithProblems === 1 ? 'run has' : 'runs have'} no result and {totals.runsWithProblems === 1 ? 'is' : 'are'} left out of these sums.

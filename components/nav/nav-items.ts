@@ -19,6 +19,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Quotes', href: '/quotes', segment: 'quotes' },
   { label: 'Outbox', href: '/outbox', segment: 'outbox', roles: ['admin', 'sales'] },
   { label: 'Shop settings', href: '/shop-settings', segment: 'shop-settings', roles: ['admin'] },
+  { label: 'Currency rates', href: '/currency-rates', segment: 'currency-rates', roles: ['admin'] },
   { label: 'Users', href: '/users', segment: 'users', roles: ['admin'] },
   { label: 'Units', href: '/account', segment: 'account' },
 ];

@@ -1,5 +1,6 @@
 import Papa from 'papaparse';
-import { CSV_COLUMNS, CSV_PROPERTIES, type CsvProperty, type CsvRow } from '../../shared/catalogue/catalogue-csv';
+import { CSV_COLUMNS, CSV_EXPORT_ONLY_COLUMNS, CSV_PROPERTIES, type CsvProperty, type CsvRow } from '../../shared/catalogue/catalogue-csv';
+import { toBeVerified } from '../../shared/catalogue/to-be-verified';
 import { alloyInputSchema, type AlloyVersionView } from '../../shared/schemas/alloy';
 import { AppError } from '../http/app-error';
 import { fieldsFromZod } from '../http/validate';
@@ -40,7 +41,8 @@ export class CatalogueCsvService {
       actor,
     );
     const { nameOf } = await this.sourceNames();
-    const rows: CsvRow[] = [];
+    const memory = new Set((await this.store.read().allSources()).filter((s) => s.kind === 'memory').map((s) => s.id));
+    const rows: (CsvRow & Record<(typeof CSV_EXPORT_ONLY_COLUMNS)[number], string>)[] = [];
     for (const item of items) {
       const v = (await this.catalogue.detail(item.id, actor)).published!;
       const base = {
@@ -56,7 +58,9 @@ export class CatalogueCsvService {
         currency: v.currency,
         price_set_on: v.priceSetOn,
         reference_temp_c: String(v.referenceTempC),
+        data_cautions: v.dataCautions,
       };
+      const alloyWide = toBeVerified({ ...v, cte: [], modulus: [], yield: [] }, (id) => memory.has(id));
       for (const table of ['cte', 'modulus', 'yield'] as const) {
         for (const p of v[table] as { tempC: number; sourceId: string }[]) {
           rows.push({
@@ -65,11 +69,13 @@ export class CatalogueCsvService {
             temp_c: String(p.tempC),
             value: String((p as unknown as Record<string, number>)[TABLE_KEY[table]]),
             source: nameOf.get(p.sourceId) ?? p.sourceId,
+            to_be_verified: [...(memory.has(p.sourceId) ? ['value'] : []), ...alloyWide].join('; '),
           });
         }
       }
     }
-    return Papa.unparse({ fields: [...CSV_COLUMNS], data: rows.map((r) => CSV_COLUMNS.map((c) => r[c])) });
+    const fields = [...CSV_COLUMNS, ...CSV_EXPORT_ONLY_COLUMNS];
+    return Papa.unparse({ fields, data: rows.map((r) => fields.map((c) => r[c])) });
   }
 
   /** Validates every row; each alloy whose rows all pass becomes a draft (new or beside the published one). */

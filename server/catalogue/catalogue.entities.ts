@@ -55,6 +55,7 @@ export class AlloyVersion {
   @Column('boolean', { name: 'price_is_demo', default: false }) priceIsDemo: boolean;
   @Column('real', { name: 'reference_temp_c' }) referenceTempC: number;
   @Column('text', { default: '' }) notes: string;
+  @Column('text', { name: 'data_cautions', default: '' }) dataCautions: string;
   @Column('simple-json', { name: 'warning_ranges' }) warningRanges: WarningRange[];
   @Column('varchar', { name: 'created_by', nullable: true }) createdBy: string | null;
   @CreateDateColumn({ name: 'created_at', type: 'datetime' }) createdAt: Date;

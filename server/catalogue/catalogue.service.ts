@@ -229,6 +229,7 @@ export class CatalogueService {
       priceIsDemo: input.priceIsDemo,
       referenceTempC: input.referenceTempC,
       notes: input.notes,
+      dataCautions: input.dataCautions,
       warningRanges: input.warningRanges,
     });
     await repo.saveVersion(version);

@@ -22,6 +22,7 @@ export function versionView(v: AlloyVersion, points: PropertyPoint[]): AlloyVers
     priceIsDemo: Boolean(v.priceIsDemo),
     referenceTempC: v.referenceTempC,
     notes: v.notes,
+    dataCautions: v.dataCautions ?? '',
     warningRanges: v.warningRanges ?? [],
     cte: of('cte').map((p) => ({ tempC: p.tempC, meanUmPerMK: p.value, sourceId: p.sourceId })),
     modulus: of('modulus').map((p) => ({ tempC: p.tempC, gpa: p.value, sourceId: p.sourceId })),

@@ -14,9 +14,21 @@ import { UserPreferences1764600210000 } from './migrations/1764600210000-user-pr
 import { UsersAndSessions1764600000000 } from './migrations/1764600000000-users-and-sessions';
 import { Catalogue1764600100000 } from './migrations/1764600100000-catalogue';
 import { FlexPartRatings1764600400000 } from './migrations/1764600400000-flex-part-ratings';
+import { AlloyDataCautions1764600500000 } from './migrations/1764600500000-alloy-data-cautions';
+import { CurrencyRates1764600510000 } from './migrations/1764600510000-currency-rates';
+import { CurrencyRate } from '../currency/currency-rate.entity';
 
-export const ENTITIES = [User, Source, Alloy, AlloyVersion, PropertyPoint, AlloyRevision, Datasheet, FlexPartRow, Job, JobRun, UserPreference, MailMessage, ShopSettingsRow, Quote, QuoteEvent];
-export const MIGRATIONS = [UsersAndSessions1764600000000, Catalogue1764600100000, Jobs1764600200000, UserPreferences1764600210000, QuotesAndMail1764600300000, FlexPartRatings1764600400000];
+export const ENTITIES = [User, Source, Alloy, AlloyVersion, PropertyPoint, AlloyRevision, Datasheet, FlexPartRow, Job, JobRun, UserPreference, MailMessage, ShopSettingsRow, Quote, QuoteEvent, CurrencyRate];
+export const MIGRATIONS = [
+  UsersAndSessions1764600000000,
+  Catalogue1764600100000,
+  Jobs1764600200000,
+  UserPreferences1764600210000,
+  QuotesAndMail1764600300000,
+  FlexPartRatings1764600400000,
+  AlloyDataCautions1764600500000,
+  CurrencyRates1764600510000,
+];
 
 /** `database` is a file path, or ':memory:' for tests. */
 export function createDataSource(database: string): DataSource {

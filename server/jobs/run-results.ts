@@ -3,6 +3,7 @@ import type { AlloyData, DesignBasis, FlexPart, RunResult } from '../../shared/e
 import { runFields, toCalcRequest } from '../../shared/jobs/run-input';
 import type { AlloyUsed, RunFields, RunProblem } from '../../shared/schemas/jobs';
 import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
+import type { CurrencyRatesService } from '../currency/currency-rates.service';
 import type { FlexPartsService } from '../flex-parts/flex-parts.service';
 import { AppError } from '../http/app-error';
 import type { ShopSettingsService } from '../settings/shop-settings.service';
@@ -32,16 +33,27 @@ export class ResultSession {
   private readonly alloys = new Map<string, Promise<AlloyLookup>>();
   private flexParts: Promise<FlexPart[]> | null = null;
   private design: Promise<DesignBasis> | null = null;
+  private rates: ReturnType<CurrencyRatesService['converter']> | null = null;
 
   constructor(
     private readonly catalogue: CatalogueService,
     private readonly flex: FlexPartsService,
     private readonly settings: ShopSettingsService,
+    private readonly currencyRates?: CurrencyRatesService,
   ) {}
 
   private designBasis(): Promise<DesignBasis> {
     this.design ??= this.settings.get().then(designBasisOf);
     return this.design;
+  }
+
+  /** The material cost in the shop's currency where a rate allows; otherwise left in the alloy's own currency. */
+  private async inShopCurrency(result: RunResult, currency: string): Promise<{ result: RunResult; currency: string }> {
+    if (!this.currencyRates) return { result, currency };
+    this.rates ??= this.currencyRates.converter();
+    const { shopCurrency, convert } = await this.rates;
+    const converted = convert(result.materialCost, currency);
+    return converted.ok ? { result: { ...result, materialCost: converted.amount }, currency: shopCurrency } : { result, currency };
   }
 
   alloy(id: string): Promise<AlloyLookup> {
@@ -98,8 +110,8 @@ export class ResultSession {
     const flexParts = fields.joint.type === 'flex' ? await this.parts() : undefined;
     const design = fields.joint.type === 'none' ? undefined : await this.designBasis();
     try {
-      const result = calculateRun(toCalcRequest(fields), main.published.data, { flexParts, slipAlloys, design });
-      return { alloy: main.used, result, problem: null, currency: main.published.currency };
+      const priced = await this.inShopCurrency(calculateRun(toCalcRequest(fields), main.published.data, { flexParts, slipAlloys, design }), main.published.currency);
+      return { alloy: main.used, result: priced.result, problem: null, currency: priced.currency };
     } catch (err) {
       if (!isEngineInputError(err)) throw err;
       const mapped = runFields(err.fields);
@@ -138,9 +150,10 @@ export class RunResults {
     private readonly catalogue: CatalogueService,
     private readonly flexParts: FlexPartsService,
     private readonly settings: ShopSettingsService,
+    private readonly currencyRates?: CurrencyRatesService,
   ) {}
 
   session(): ResultSession {
-    return new ResultSession(this.catalogue, this.flexParts, this.settings);
+    return new ResultSession(this.catalogue, this.flexParts, this.settings, this.currencyRates);
   }
 }

@@ -1,10 +1,12 @@
 import { createHash, randomBytes, randomUUID } from 'node:crypto';
+import { toShopCurrency } from '../../shared/currency/convert';
 import { peakTempC } from '../../shared/engine/limits';
 import { compareWithFirst, priceOption, type PricedAlloy, type PricedRunInput } from '../../shared/quotes/pricing';
 import { FAMILY_LABELS } from '../../shared/schemas/alloy';
 import type { PublicUser } from '../../shared/schemas/auth';
 import type { PublicQuoteView, QuoteInput, QuotePricing, QuoteStatus, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
-import type { CatalogueService } from '../catalogue/catalogue.service';
+import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
+import type { CurrencyRatesService } from '../currency/currency-rates.service';
 import { AppError } from '../http/app-error';
 import type { JobsStore } from '../jobs/jobs.repository';
 import type { Mailer } from '../mail/mailer';
@@ -32,6 +34,7 @@ export class QuotesService {
     private readonly settings: ShopSettingsService,
     private readonly users: UsersRepository,
     private readonly mailer: Mailer,
+    private readonly currencyRates?: CurrencyRatesService,
   ) {}
 
   // ---- pricing ----
@@ -55,24 +58,32 @@ export class QuotesService {
     const [{ runs }, settings] = await Promise.all([this.jobRuns(quote.jobId), this.settings.get()]);
     if (runs.length === 0) throw AppError.badRequest('job_has_no_runs', 'The job has no runs to quote yet.', { jobId: 'The job has no runs yet' });
     const alloys = new Map<string, PricedAlloy>();
+    const rates = this.currencyRates ? await this.currencyRates.table() : { shopCurrency: settings.currency, rates: [] };
     for (const id of alloyIdsOf(quote.options)) {
+      let a: PublishedAlloy;
       try {
-        const a = await this.catalogue.publishedAlloy(id);
-        alloys.set(id, {
-          alloyId: id,
-          designation: a.designation,
-          uns: a.uns,
-          family: a.family,
-          version: a.version,
-          densityKgM3: a.data.densityKgM3,
-          pricePerKg: a.data.pricePerKg,
-          maxContinuousC: a.data.maxContinuousC,
-          maxIntermittentC: a.data.maxIntermittentC,
-        });
+        a = await this.catalogue.publishedAlloy(id);
       } catch {
         const index = quote.options.findIndex((o) => alloyIdsOf([o]).includes(id));
         throw AppError.badRequest('invalid_input', 'An option names an alloy that is not published.', { [`options.${index}.alloyId`]: 'Not a published alloy' });
       }
+      // Prices in another currency are converted at the admin's rate, or the quote is refused: never summed as they stand.
+      const price = toShopCurrency(a.data.pricePerKg, a.currency, rates);
+      if (!price.ok) {
+        const index = quote.options.findIndex((o) => alloyIdsOf([o]).includes(id));
+        throw AppError.badRequest('currency_not_converted', `${a.designation} (${a.uns}): ${price.message}`, { [`options.${index}.alloyId`]: price.message });
+      }
+      alloys.set(id, {
+        alloyId: id,
+        designation: a.designation,
+        uns: a.uns,
+        family: a.family,
+        version: a.version,
+        densityKgM3: a.data.densityKgM3,
+        pricePerKg: price.amount,
+        maxContinuousC: a.data.maxContinuousC,
+        maxIntermittentC: a.data.maxIntermittentC,
+      });
     }
     const options = quote.options.map((o) => priceOption(runs, o, alloys, settings));
     return {

@@ -21,6 +21,9 @@ export const CSV_COLUMNS = [
   'source',
 ] as const;
 
+/** Written on export for people reading the file; an import does not need them and ignores them. */
+export const CSV_EXPORT_ONLY_COLUMNS = ['to_be_verified', 'data_cautions'] as const;
+
 export type CsvColumn = (typeof CSV_COLUMNS)[number];
 export type CsvRow = Record<CsvColumn, string>;
 

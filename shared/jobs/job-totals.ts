@@ -13,6 +13,7 @@ export function jobTotals(runs: TotalsRun[]): JobTotals {
     massKg: computed.reduce((sum, r) => sum + r.result!.massKg, 0),
     materialCost: oneCurrency ? computed.reduce((sum, r) => sum + r.result!.materialCost, 0) : null,
     currency: oneCurrency ? (computed[0]?.currency ?? null) : null,
+    costNote: oneCurrency ? null : `The runs are priced in ${[...currencies].sort().join(' and ')}; prices in different currencies are not added up. An admin can set a rate under Currency rates.`,
     lengthMm: computed.reduce((sum, r) => sum + r.result!.totalLengthMm, 0),
     peakTempC: temps.length > 0 ? Math.max(...temps) : null,
     runCount: runs.length,

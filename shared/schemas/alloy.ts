@@ -78,6 +78,8 @@ const alloyShape = {
     priceIsDemo: z.boolean(),
     referenceTempC: finite('Reference temperature').min(-50).max(100, { error: 'A CTE reference above 100 °C is unusual; check the data sheet' }),
     notes: z.string().max(4000, { error: 'Use at most 4000 characters' }),
+    /** What a user must know about this alloy's data: limits lowered to the data's reach, values still to be verified. */
+    dataCautions: z.string().max(1000, { error: 'Use at most 1000 characters' }),
     warningRanges: z.array(warningRangeSchema),
     cte: table(ctePointSchema, 'Expansion').refine((rows) => rows.length >= 2, { error: 'Give at least two expansion points' }),
     // Either may be empty where nothing is published; restrained stress is then not judged.
@@ -89,6 +91,7 @@ export const alloyInputSchema = z.object({
   ...alloyShape,
   priceIsDemo: alloyShape.priceIsDemo.default(false),
   notes: alloyShape.notes.default(''),
+  dataCautions: alloyShape.dataCautions.default(''),
   warningRanges: alloyShape.warningRanges.default([]),
 });
 export type AlloyInput = z.infer<typeof alloyInputSchema>;

@@ -170,7 +170,7 @@ export interface RunView extends RunFields {
   /** Computed on every read from the latest published data of the alloy; null when `problem` is set. */
   result: RunResult | null;
   problem: RunProblem | null;
-  /** Currency of materialCost (the alloy's price currency). */
+  /** Currency of materialCost: the shop's, or the alloy's price currency when no rate converts it. */
   currency: string | null;
   createdAt: string;
   updatedAt: string;
@@ -183,6 +183,8 @@ export interface JobTotals {
   /** null when the runs' prices are in different currencies. */
   materialCost: number | null;
   currency: string | null;
+  /** Why there is no material cost total: the runs' costs are in different currencies (no rate set to convert them). */
+  costNote: string | null;
   /** Sum of the segment lengths of the runs with a result. */
   lengthMm: number;
   /** Highest temperature of any run with a result; null when none has one. */
