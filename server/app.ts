@@ -18,6 +18,7 @@ import { catalogueRouter } from './catalogue/catalogue.router';
 import { CatalogueStore } from './catalogue/catalogue.repository';
 import { CatalogueService } from './catalogue/catalogue.service';
 import { CatalogueCsvService } from './catalogue/catalogue-csv.service';
+import { ImportJobs } from './catalogue/csv-import/import-jobs';
 import { datasheetsRouter } from './datasheets/datasheets.router';
 import { DatasheetsService } from './datasheets/datasheets.service';
 import { FlexPartsRepository } from './flex-parts/flex-parts.repository';
@@ -99,7 +100,7 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.use('/public', publicQuotesRouter(quotes, options.publicUrl));
   api.use('/outbox', outboxRouter(new OutboxRepository(dataSource)));
   api.use('/me', preferencesRouter(new PreferencesService(new PreferencesRepository(dataSource))));
-  api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore)));
+  api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore, new ImportJobs())));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

@@ -53,6 +53,10 @@ export class CatalogueRepository {
       ? Promise.resolve([])
       : this.m.find(PropertyPoint, { where: { versionId: In(versionIds) }, order: { tempC: 'ASC' } });
   }
+  /** Plain INSERTs for rows known to be new (no read-before-write, no reload), e.g. a large import. */
+  async insertNew<T extends object>(entity: new () => T, rows: T[]) {
+    if (rows.length > 0) await this.m.createQueryBuilder().insert().into(entity).values(rows as never).updateEntity(false).execute();
+  }
   async replacePoints(versionId: string, kind: PropertyKind, points: PropertyPoint[]) {
     await this.m.delete(PropertyPoint, { versionId, kind });
     if (points.length > 0) await this.m.insert(PropertyPoint, points);
