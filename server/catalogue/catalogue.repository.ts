@@ -33,6 +33,9 @@ export class CatalogueRepository {
   findVersions(ids: string[]) {
     return ids.length === 0 ? Promise.resolve([]) : this.m.findBy(AlloyVersion, { id: In(ids) });
   }
+  versionsOf(alloyId: string) {
+    return this.m.find(AlloyVersion, { where: { alloyId }, select: { id: true, version: true, state: true } });
+  }
   findVersionByNumber(alloyId: string, version: number) {
     return this.m.findOneBy(AlloyVersion, { alloyId, version });
   }

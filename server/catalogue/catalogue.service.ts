@@ -158,10 +158,17 @@ export class CatalogueService {
     return versionView(row, await repo.pointsFor([row.id]));
   }
 
+  /**
+   * The alloy's history. Editors see every step; other roles only steps of versions that were
+   * published (and those of no version: retiring, data sheets), never the edits of an open draft.
+   */
   async revisions(id: string, actor: Actor): Promise<RevisionView[]> {
     const repo = this.store.read();
     await this.visibleAlloy(repo, id, actor);
-    return (await repo.revisionsFor(id)).map(revisionView);
+    const all = await repo.revisionsFor(id);
+    if (canEdit(actor)) return all.map(revisionView);
+    const released = new Set((await repo.versionsOf(id)).filter((v) => v.state !== 'draft').map((v) => v.version));
+    return all.filter((r) => r.version === null || released.has(r.version)).map(revisionView);
   }
 
   /** The change an admin reviews before publishing: the draft against the published version. */
