@@ -18,6 +18,26 @@ export class QuotesRepository {
   count() {
     return this.m.count(Quote);
   }
+  /** The one draft → sent transition, guarded in the database: false when the quote was no longer a draft. */
+  async markSent(id: string, fields: Pick<Quote, 'snapshot' | 'tokenHash' | 'sentAt'>): Promise<boolean> {
+    const result = await this.m
+      .createQueryBuilder()
+      .update(Quote)
+      .set({ ...fields, status: 'sent', updatedAt: fields.sentAt! })
+      .where('id = :id AND status = :draft', { id, draft: 'draft' })
+      .execute();
+    return result.affected === 1;
+  }
+  /** Back to draft after the e-mail could not go out; only the send that set this token can undo itself. */
+  async undoSent(id: string, tokenHash: string): Promise<boolean> {
+    const result = await this.m
+      .createQueryBuilder()
+      .update(Quote)
+      .set({ status: 'draft', snapshot: null, tokenHash: null, sentAt: null, updatedAt: new Date() })
+      .where('id = :id AND status = :sent AND token_hash = :tokenHash', { id, sent: 'sent', tokenHash })
+      .execute();
+    return result.affected === 1;
+  }
   save(quote: Quote) {
     return this.m.save(Quote, quote);
   }

@@ -224,22 +224,39 @@ export class QuotesService {
     return this.mailFor(quote, jobName, pricing, `${origin}/q/…`);
   }
 
-  /** Freezes the prices, makes the customer's private link and e-mails it. */
+  /**
+   * Freezes the prices, makes the customer's private link and e-mails it. The draft → sent step is
+   * one conditional UPDATE: of calls racing each other one wins, the others answer 409 and mail nothing.
+   * When the e-mail cannot go out the quote goes back to draft, so no link exists that nobody received.
+   */
   async send(id: string, actor: Actor, origin: string): Promise<QuoteView> {
-    const quote = await this.store.read().find(id);
-    if (!quote) throw AppError.notFound('There is no such quote.');
-    if (quote.status !== 'draft') throw AppError.conflict('not_draft', 'This quote has already been sent.');
-    if (quote.validUntil < today()) throw AppError.badRequest('invalid_input', 'The quote’s date has passed.', { validUntil: 'Choose a date from today on' });
-    const pricing: QuotePricing = { ...(await this.priceNow(quote)), frozen: true };
-    const { jobName } = await this.jobRuns(quote.jobId);
     const token = randomBytes(32).toString('base64url');
-    await this.mailer.send(this.mailFor(quote, jobName, pricing, `${origin}/q/${token}`));
-    return this.store.write(async (repo) => {
-      Object.assign(quote, { status: 'sent', snapshot: pricing, tokenHash: hashToken(token), sentAt: new Date(), updatedAt: new Date() });
-      await repo.save(quote);
-      await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status: 'sent', note: `E-mailed to ${quote.customerEmail}`, by: actor.name, at: new Date() });
-      return this.view(repo, quote);
+    const tokenHash = hashToken(token);
+    const mail = await this.store.write(async (repo) => {
+      const quote = await repo.find(id);
+      if (!quote) throw AppError.notFound('There is no such quote.');
+      if (quote.status !== 'draft') throw AppError.conflict('not_draft', 'This quote has already been sent.');
+      if (quote.validUntil < today()) throw AppError.badRequest('invalid_input', 'The quote’s date has passed.', { validUntil: 'Choose a date from today on' });
+      const pricing: QuotePricing = { ...(await this.priceNow(quote)), frozen: true };
+      const { jobName } = await this.jobRuns(quote.jobId);
+      if (!(await repo.markSent(id, { snapshot: pricing, tokenHash, sentAt: new Date() }))) {
+        throw AppError.conflict('not_draft', 'This quote has already been sent.');
+      }
+      await repo.addEvent({ id: randomUUID(), quoteId: id, status: 'sent', note: `E-mailed to ${quote.customerEmail}`, by: actor.name, at: new Date() });
+      return this.mailFor(quote, jobName, pricing, `${origin}/q/${token}`);
     });
+    try {
+      await this.mailer.send(mail);
+    } catch (err) {
+      console.error(`[dilato] quote ${id}: the e-mail could not be sent:`, err);
+      await this.store.write(async (repo) => {
+        if (await repo.undoSent(id, tokenHash)) {
+          await repo.addEvent({ id: randomUUID(), quoteId: id, status: 'draft', note: 'The e-mail could not be sent; back to draft', by: actor.name, at: new Date() });
+        }
+      });
+      throw new AppError(502, 'mail_failed', 'The e-mail could not be sent, so the quote stays a draft. Check the mail server and send it again.');
+    }
+    return this.get(id);
   }
 
   // ---- the customer, through the private link ----
