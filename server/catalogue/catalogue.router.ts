@@ -4,7 +4,7 @@ import { MAX_IMPORT_BYTES } from '../../shared/catalogue/catalogue-csv';
 import { alloyInputSchema, alloyListQuerySchema, alloyPatchSchema, sourceInputSchema } from '../../shared/schemas/alloy';
 import { requireRole, requireSignedIn } from '../auth/session';
 import { AppError } from '../http/app-error';
-import { fieldsFromZod, parseBody } from '../http/validate';
+import { fieldsFromZod, parseBody, parsePatch } from '../http/validate';
 import type { CatalogueCsvService } from './catalogue-csv.service';
 import type { CatalogueService } from './catalogue.service';
 
@@ -59,7 +59,7 @@ export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvServ
   });
 
   router.patch('/alloys/:id', editors, async (req, res) => {
-    res.json({ alloy: await service.patch(req.params.id as string, parseBody(alloyPatchSchema, req.body), req.user!) });
+    res.json({ alloy: await service.patch(req.params.id as string, parsePatch(alloyPatchSchema, req.body), req.user!) });
   });
 
   router.get('/alloys/:id/versions/:version', requireSignedIn, async (req, res) => {

@@ -10,7 +10,7 @@ import {
 } from '../../shared/schemas/jobs';
 import { currentUser, requireRole, requireSignedIn } from '../auth/session';
 import { AppError } from '../http/app-error';
-import { fieldsFromZod, parseBody } from '../http/validate';
+import { fieldsFromZod, parseBody, parsePatch } from '../http/validate';
 import type { z } from 'zod';
 import type { JobsService } from './jobs.service';
 
@@ -39,7 +39,7 @@ export function jobsRouter(service: JobsService): Router {
   });
 
   router.patch('/jobs/:id', editors, async (req, res) => {
-    res.json({ job: await service.patchJob(id(req.params), parseBody(jobPatchSchema, req.body)) });
+    res.json({ job: await service.patchJob(id(req.params), parsePatch(jobPatchSchema, req.body)) });
   });
 
   router.post('/jobs/:id/runs', editors, async (req, res) => {
@@ -55,7 +55,7 @@ export function jobsRouter(service: JobsService): Router {
   });
 
   router.patch('/runs/:id', editors, async (req, res) => {
-    res.json({ run: await service.patchRun(id(req.params), parseBody(runPatchSchema, req.body)) });
+    res.json({ run: await service.patchRun(id(req.params), parsePatch(runPatchSchema, req.body)) });
   });
 
   router.delete('/runs/:id', editors, async (req, res) => {
