@@ -1,11 +1,13 @@
 import express from 'express';
 import helmet from 'helmet';
 import type { DataSource } from 'typeorm';
+import type { TrustProxy } from './config';
 import { authRouter } from './auth/auth.router';
 import { AuthService } from './auth/auth.service';
 import { createLucia } from './auth/lucia';
 import { loadSession } from './auth/session';
-import { DEFAULT_SIGN_IN_LIMITS, type SignInLimits } from './auth/sign-in-limits';
+import { KnownAddressesRepository } from './auth/known-addresses.repository';
+import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './auth/sign-in-limits';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { requireSameOrigin } from './http/same-origin';
 import { UsersRepository } from './users/users.repository';
@@ -47,15 +49,17 @@ export interface AppOptions {
   mailer: Mailer;
   webDir?: string;
   publicUrl?: string;
-  trustProxy?: boolean;
-  signInLimits?: SignInLimits;
+  /** Proxy hops (or proxy addresses) whose X-Forwarded-For and -Proto are believed; see README. */
+  trustProxy?: TrustProxy;
+  signInLimits?: Partial<SignInLimits>;
 }
 
 /** Builds the whole Express app on an open DataSource without listening (tests use it directly). */
 export function createApp(dataSource: DataSource, options: AppOptions) {
   const auth = createLucia(dataSource);
   const usersRepository = new UsersRepository(dataSource);
-  const authService = new AuthService(usersRepository, auth);
+  const signInLimiter = new SignInLimiter({ ...DEFAULT_SIGN_IN_LIMITS, ...options.signInLimits });
+  const authService = new AuthService(usersRepository, auth, signInLimiter, new KnownAddressesRepository(dataSource), options.mailer);
   const usersService = new UsersService(usersRepository, auth);
   const catalogueStore = new CatalogueStore(dataSource);
   const catalogueService = new CatalogueService(catalogueStore);
@@ -64,7 +68,7 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
 
   const app = express();
   app.disable('x-powered-by');
-  if (options.trustProxy) app.set('trust proxy', 1);
+  app.set('trust proxy', options.trustProxy ?? false);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -87,7 +91,7 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
   });
-  api.use('/auth', authRouter(auth, authService, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS));
+  api.use('/auth', authRouter(auth, authService));
   api.use('/users', usersRouter(usersService));
   api.use('/calc', calcRouter(new CalcService(catalogueService, flexPartsService)));
   api.use('/flex-parts', flexPartsRouter(flexPartsService));

@@ -53,7 +53,7 @@ describe('sign-in, me and sign-out', () => {
   });
 
   it('when served over HTTPS behind a trusted proxy, then the cookie is Secure', async () => {
-    const secure = await createTestApp({ trustProxy: true });
+    const secure = await createTestApp({ trustProxy: 1 });
     const res = await client(secure.app)
       .post('/api/auth/sign-in')
       .set('X-Forwarded-Proto', 'https')

@@ -4,14 +4,13 @@ import { parseBody } from '../http/validate';
 import type { AuthService } from './auth.service';
 import type { Auth } from './lucia';
 import { currentUser, writeSessionCookie } from './session';
-import { signInLimiters, type SignInLimits } from './sign-in-limits';
 
-export function authRouter(auth: Auth, service: AuthService, limits: SignInLimits): Router {
+export function authRouter(auth: Auth, service: AuthService): Router {
   const router = Router();
 
-  router.post('/sign-in', ...signInLimiters(limits), async (req, res) => {
+  router.post('/sign-in', async (req, res) => {
     const input = parseBody(signInSchema, req.body);
-    const { user, sessionId } = await service.signIn(input);
+    const { user, sessionId } = await service.signIn(input, req.ip);
     writeSessionCookie(auth, req, res, sessionId);
     res.json({ user });
   });
