@@ -9,6 +9,7 @@ import { loadSession } from './auth/session';
 import { KnownAddressesRepository } from './auth/known-addresses.repository';
 import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './auth/sign-in-limits';
 import { apiNotFound, errorHandler } from './http/error-handler';
+import { DEFAULT_PUBLIC_LIMITS, publicLimiters, type PublicLimits } from './http/public-limits';
 import { requireSameOrigin } from './http/same-origin';
 import { UsersRepository } from './users/users.repository';
 import { usersRouter } from './users/users.router';
@@ -52,6 +53,7 @@ export interface AppOptions {
   /** Proxy hops (or proxy addresses) whose X-Forwarded-For and -Proto are believed; see README. */
   trustProxy?: TrustProxy;
   signInLimits?: Partial<SignInLimits>;
+  publicLimits?: Partial<PublicLimits>;
 }
 
 /** Builds the whole Express app on an open DataSource without listening (tests use it directly). */
@@ -101,7 +103,7 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   const quotes = new QuotesService(new QuotesStore(dataSource), new JobsStore(dataSource), catalogueService, shopSettings, usersRepository, options.mailer);
   api.use('/settings', shopSettingsRouter(shopSettings));
   api.use('/quotes', quotesRouter(quotes, options.publicUrl));
-  api.use('/public', publicQuotesRouter(quotes, options.publicUrl));
+  api.use('/public', ...publicLimiters({ ...DEFAULT_PUBLIC_LIMITS, ...options.publicLimits }), publicQuotesRouter(quotes, options.publicUrl));
   api.use('/outbox', outboxRouter(new OutboxRepository(dataSource)));
   api.use('/me', preferencesRouter(new PreferencesService(new PreferencesRepository(dataSource))));
   api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore, new ImportJobs())));

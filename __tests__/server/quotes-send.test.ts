@@ -40,3 +40,21 @@ describe('sending a quote once', () => {
     expect((await sales.patch(`/api/quotes/${quote.id}`).send({ message: 'Still editable' })).status).toBe(200);
   });
 });
+
+describe('the customer link routes', () => {
+  it('when one address tries many wrong tokens, then it is refused with 429 while the real customer elsewhere still opens the quote', async () => {
+    t = await createTestApp({ trustProxy: 1, publicLimits: { badLinksPerAddress: 5 } });
+    const sales = await signedIn(t.app, 'sales');
+    const quote = await draftQuote(t.app, sales);
+    expect((await sales.post(`/api/quotes/${quote.id}/send`).send({})).status).toBe(200);
+    const token = tokenIn((await mailTo(sales, 'oda@example.test'))[0].text);
+    const from = (address: string) => (url: string) => request(t.app).get(url).set('X-Forwarded-For', address);
+    const guesser = from('203.0.113.50');
+    for (let i = 0; i < 5; i += 1) expect((await guesser(`/api/public/quotes/${'A'.repeat(40)}${i}`)).status).toBe(404);
+    const refused = await guesser(`/api/public/quotes/${token}`);
+    expect(refused.status).toBe(429);
+    expectErrorShape(refused.body, 'too_many_requests');
+    expect(Number(refused.headers['retry-after'])).toBeGreaterThan(0);
+    expect((await from('198.51.100.3')(`/api/public/quotes/${token}`)).status).toBe(200);
+  });
+});
