@@ -122,11 +122,19 @@ export type AlloyStatusAction = 'publish' | 'retire' | 'restore';
 
 /** Publish the draft, retire or restore: admin only, each with a note for the history. */
 export function useAlloyStatusMutation(id: string) {
-  const invalidate = useInvalidateAlloys();
+  const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async ({ action, note }: { action: AlloyStatusAction; note: string }) =>
       (await api.post<{ alloy: AlloyDetail }>(`/alloys/${encodeURIComponent(id)}/${action}`, { note })).alloy,
-    onSuccess: invalidate,
+    // The answer is the alloy as it now is; after publishing there is no draft, so the review is dropped, not refetched (it would answer 409).
+    onSuccess: (alloy) => {
+      queryClient.setQueryData(alloyKeys.detail(id), alloy);
+      if (!alloy.draft) queryClient.removeQueries({ queryKey: alloyKeys.review(id) });
+      return queryClient.invalidateQueries({
+        queryKey: alloyKeys.all,
+        predicate: (query) => query.queryKey[1] !== 'review' && !(query.queryKey[1] === 'detail' && query.queryKey[2] === id),
+      });
+    },
   });
 }
 

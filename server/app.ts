@@ -10,6 +10,7 @@ import { KnownAddressesRepository } from './auth/known-addresses.repository';
 import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './auth/sign-in-limits';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { DEFAULT_PUBLIC_LIMITS, publicLimiters, type PublicLimits } from './http/public-limits';
+import { requestGuards } from './http/request-guards';
 import { requireSameOrigin } from './http/same-origin';
 import { UsersRepository } from './users/users.repository';
 import { usersRouter } from './users/users.router';
@@ -83,10 +84,17 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
           'upgrade-insecure-requests': null,
         },
       },
+      // Sent only over HTTPS, below: over plain HTTP it means nothing and can lock a browser out of the host.
+      strictTransportSecurity: false,
     }),
   );
+  app.use((req, res, next) => {
+    if (req.secure) res.setHeader('Strict-Transport-Security', 'max-age=31536000; includeSubDomains');
+    next();
+  });
 
   const api = express.Router();
+  api.use(requestGuards);
   api.use(express.json({ limit: '1mb' }));
   api.use(requireSameOrigin(options.publicUrl));
   api.use(loadSession(auth));

@@ -3,7 +3,7 @@ import { signInSchema } from '../../shared/schemas/auth';
 import { parseBody } from '../http/validate';
 import type { AuthService } from './auth.service';
 import type { Auth } from './lucia';
-import { currentUser, writeSessionCookie } from './session';
+import { writeSessionCookie } from './session';
 
 export function authRouter(auth: Auth, service: AuthService): Router {
   const router = Router();
@@ -21,8 +21,9 @@ export function authRouter(auth: Auth, service: AuthService): Router {
     res.status(204).end();
   });
 
+  // Asked on every page load: being signed out is an answer, not an error.
   router.get('/me', (req, res) => {
-    res.json({ user: currentUser(req) });
+    res.json({ user: req.user ?? null });
   });
 
   return router;
