@@ -5,7 +5,6 @@ import { AppError } from './app-error';
 /** Longer URLs than any screen of Dilato makes are refused before routing. */
 export const MAX_URL_CHARS = 8 * 1024;
 
-// eslint-disable-next-line no-control-regex
 const CONTROL = /[\u0000-\u001f\u007f]/;
 
 /**
