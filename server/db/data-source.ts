@@ -9,6 +9,8 @@ import { MailMessage } from '../mail/mail-message.entity';
 import { Quote, QuoteEvent } from '../quotes/quote.entities';
 import { ShopSettingsRow } from '../settings/shop-settings.entity';
 import { SignInAddress } from '../auth/sign-in-address.entity';
+import { ActivityEntry } from '../activity/activity.entity';
+import { Activity1764600510000 } from './migrations/1764600510000-activity';
 import { SignInAddresses1764600500000 } from './migrations/1764600500000-sign-in-addresses';
 import { QuotesAndMail1764600300000 } from './migrations/1764600300000-quotes-and-mail';
 import { Jobs1764600200000 } from './migrations/1764600200000-jobs';
@@ -16,8 +18,8 @@ import { UserPreferences1764600210000 } from './migrations/1764600210000-user-pr
 import { UsersAndSessions1764600000000 } from './migrations/1764600000000-users-and-sessions';
 import { Catalogue1764600100000 } from './migrations/1764600100000-catalogue';
 
-export const ENTITIES = [User, Source, Alloy, AlloyVersion, PropertyPoint, AlloyRevision, Datasheet, FlexPartRow, Job, JobRun, UserPreference, MailMessage, ShopSettingsRow, Quote, QuoteEvent, SignInAddress];
-export const MIGRATIONS = [UsersAndSessions1764600000000, Catalogue1764600100000, Jobs1764600200000, UserPreferences1764600210000, QuotesAndMail1764600300000, SignInAddresses1764600500000];
+export const ENTITIES = [User, Source, Alloy, AlloyVersion, PropertyPoint, AlloyRevision, Datasheet, FlexPartRow, Job, JobRun, UserPreference, MailMessage, ShopSettingsRow, Quote, QuoteEvent, SignInAddress, ActivityEntry];
+export const MIGRATIONS = [UsersAndSessions1764600000000, Catalogue1764600100000, Jobs1764600200000, UserPreferences1764600210000, QuotesAndMail1764600300000, SignInAddresses1764600500000, Activity1764600510000];
 
 /** `database` is a file path, or ':memory:' for tests. */
 export function createDataSource(database: string): DataSource {

@@ -2,9 +2,15 @@ import type { DataSource, EntityManager } from 'typeorm';
 import { In } from 'typeorm';
 import { Quote, QuoteEvent } from './quote.entities';
 import { Store } from '../db/store';
+import { ActivityRows } from '../activity/activity.repository';
 
 export class QuotesRepository {
-  constructor(private readonly m: EntityManager) {}
+  /** Who changed what, written in the same transaction as the change. */
+  readonly activity: ActivityRows;
+
+  constructor(private readonly m: EntityManager) {
+    this.activity = new ActivityRows(m);
+  }
 
   list() {
     return this.m.find(Quote, { order: { updatedAt: 'DESC' } });

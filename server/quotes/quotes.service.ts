@@ -5,6 +5,8 @@ import { FAMILY_LABELS } from '../../shared/schemas/alloy';
 import type { PublicUser } from '../../shared/schemas/auth';
 import type { PublicQuoteView, QuoteInput, QuotePricing, QuoteStatus, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
 import type { CatalogueService } from '../catalogue/catalogue.service';
+import type { ActivityView } from '../../shared/schemas/activity';
+import { activityView, changesBetween } from '../activity/activity.views';
 import { AppError } from '../http/app-error';
 import type { JobsStore } from '../jobs/jobs.repository';
 import type { Mailer } from '../mail/mailer';
@@ -168,6 +170,12 @@ export class QuotesService {
     return this.view(repo, await this.expireIfDue(repo, quote));
   }
 
+  async activity(id: string): Promise<ActivityView[]> {
+    const repo = this.store.read();
+    if (!(await repo.find(id))) throw AppError.notFound('There is no such quote.');
+    return (await repo.activity.list({ subject: 'quote', subjectId: id })).map(activityView);
+  }
+
   // ---- sales ----
 
   async create(input: QuoteInput, actor: Actor): Promise<QuoteView> {
@@ -192,15 +200,18 @@ export class QuotesService {
       await this.priceNow(quote);
       await repo.save(quote);
       await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status: 'draft', note: 'Created', by: actor.name, at: now });
+      await repo.activity.add({ subject: 'quote', subjectId: quote.id, subjectName: number, jobId: null, action: 'created' }, actor);
       return this.view(repo, quote);
     });
   }
 
-  async update(id: string, patch: Partial<QuoteInput>): Promise<QuoteView> {
+  async update(id: string, patch: Partial<QuoteInput>, actor: Actor | null = null): Promise<QuoteView> {
     return this.store.write(async (repo) => {
       const quote = await repo.find(id);
       if (!quote) throw AppError.notFound('There is no such quote.');
       if (quote.status !== 'draft') throw AppError.conflict('not_draft', 'A sent quote cannot be changed; make a new one.');
+      const changes = changesBetween(quote, patch);
+      if (changes.length > 0) await repo.activity.add({ subject: 'quote', subjectId: id, subjectName: quote.number, jobId: null, action: 'edited', changes }, actor);
       Object.assign(quote, patch, { updatedAt: new Date() });
       if (patch.jobId) await this.jobRuns(patch.jobId);
       await this.priceNow(quote);
@@ -243,6 +254,7 @@ export class QuotesService {
         throw AppError.conflict('not_draft', 'This quote has already been sent.');
       }
       await repo.addEvent({ id: randomUUID(), quoteId: id, status: 'sent', note: `E-mailed to ${quote.customerEmail}`, by: actor.name, at: new Date() });
+      await repo.activity.add({ subject: 'quote', subjectId: id, subjectName: quote.number, jobId: null, action: 'sent', changes: [{ path: 'customerEmail', before: null, after: quote.customerEmail }] }, actor);
       return this.mailFor(quote, jobName, pricing, `${origin}/q/${token}`);
     });
     try {
