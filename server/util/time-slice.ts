@@ -2,7 +2,7 @@
 export const yieldToEventLoop = () => new Promise<void>((resolve) => setImmediate(resolve));
 
 /** Long work on the one JavaScript thread stays in slices this short, so other requests wait at most about this long. */
-export const SLICE_MS = 12;
+export const SLICE_MS = 8;
 
 /**
  * Cuts a long loop into slices: `due()` says when the current slice has used its time,
