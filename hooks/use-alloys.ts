@@ -1,4 +1,6 @@
 import { keepPreviousData, useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useEffect, useState } from 'react';
+import type { ImportJobView } from '../shared/catalogue/catalogue-csv';
 import type { DiffEntry } from '../shared/catalogue/alloy-diff';
 import type {
   AlloyDetail,
@@ -28,12 +30,7 @@ export interface AlloyReview {
   diff: DiffEntry[];
 }
 
-export interface ImportReport {
-  created: string[];
-  updated: string[];
-  unchanged: string[];
-  refused: { line: number; uns: string; message: string }[];
-}
+export type { ImportJobView, ImportReport } from '../shared/catalogue/catalogue-csv';
 
 export const alloyKeys = {
   all: ['alloys'] as const,
@@ -42,6 +39,7 @@ export const alloyKeys = {
   detail: (id: string) => [...alloyKeys.all, 'detail', id] as const,
   revisions: (id: string) => [...alloyKeys.all, 'revisions', id] as const,
   review: (id: string) => [...alloyKeys.all, 'review', id] as const,
+  importJob: (id: string) => ['alloy-imports', id] as const,
 };
 
 /** Where the browser downloads the catalogue as CSV (a plain link: the server sends an attachment). */
@@ -124,18 +122,69 @@ export type AlloyStatusAction = 'publish' | 'retire' | 'restore';
 
 /** Publish the draft, retire or restore: admin only, each with a note for the history. */
 export function useAlloyStatusMutation(id: string) {
-  const invalidate = useInvalidateAlloys();
+  const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async ({ action, note }: { action: AlloyStatusAction; note: string }) =>
       (await api.post<{ alloy: AlloyDetail }>(`/alloys/${encodeURIComponent(id)}/${action}`, { note })).alloy,
-    onSuccess: invalidate,
+    // The answer is the alloy as it now is; after publishing there is no draft, so the review is dropped, not refetched (it would answer 409).
+    onSuccess: (alloy) => {
+      queryClient.setQueryData(alloyKeys.detail(id), alloy);
+      if (!alloy.draft) queryClient.removeQueries({ queryKey: alloyKeys.review(id) });
+      return queryClient.invalidateQueries({
+        queryKey: alloyKeys.all,
+        predicate: (query) => query.queryKey[1] !== 'review' && !(query.queryKey[1] === 'detail' && query.queryKey[2] === id),
+      });
+    },
   });
 }
 
-export function useImportCsvMutation() {
-  const invalidate = useInvalidateAlloys();
-  return useMutation({
-    mutationFn: (csvText: string) => send<ImportReport>('/alloys/import', csvText, { contentType: 'text/csv' }),
-    onSuccess: invalidate,
+const IMPORT_POLL_MS = 400;
+const isRunning = (job: ImportJobView | undefined) => job !== undefined && job.phase !== 'done' && job.phase !== 'failed';
+
+/** The state of a background import, polled until it is done or failed. */
+export function useImportJobQuery(id: string | undefined) {
+  return useQuery({
+    queryKey: alloyKeys.importJob(id ?? ''),
+    queryFn: async () => (await api.get<{ import: ImportJobView }>(`/alloys/imports/${encodeURIComponent(id!)}`)).import,
+    enabled: Boolean(id),
+    refetchInterval: (query) => (isRunning(query.state.data) ? IMPORT_POLL_MS : false),
   });
 }
+
+/**
+ * Sends a CSV (reporting the upload), then follows the import the server runs in the background;
+ * the catalogue lists refresh when it finishes.
+ */
+export function useCsvImport() {
+  const queryClient = useQueryClient();
+  const [jobId, setJobId] = useState<string>();
+  const [uploadFraction, setUploadFraction] = useState<number>();
+  const start = useMutation({
+    mutationFn: async (csvText: string) => {
+      setUploadFraction(0);
+      const { import: job } = await send<{ import: ImportJobView }>('/alloys/import', csvText, { contentType: 'text/csv', onProgress: setUploadFraction });
+      queryClient.setQueryData(alloyKeys.importJob(job.id), job);
+      return job;
+    },
+    onSuccess: (job) => setJobId(job.id),
+    onSettled: () => setUploadFraction(undefined),
+  });
+  const job = useImportJobQuery(jobId);
+  const finished = job.data?.phase === 'done' || job.data?.phase === 'failed';
+  useEffect(() => {
+    if (finished) void queryClient.invalidateQueries({ queryKey: alloyKeys.all });
+  }, [finished, queryClient]);
+  return {
+    start: (csvText: string) => {
+      setJobId(undefined);
+      return start.mutateAsync(csvText);
+    },
+    uploadFraction,
+    job: jobId ? job.data : undefined,
+    /** Why the upload or the polling failed (a failed import says so in `job.error`). */
+    failure: start.error ?? job.error ?? undefined,
+    busy: start.isPending || isRunning(job.data),
+  };
+}
+
+export type CsvImport = ReturnType<typeof useCsvImport>;

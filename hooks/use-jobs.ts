@@ -1,4 +1,5 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { ActivityView } from '../shared/schemas/activity';
 import type { JobCreateInput, JobDetail, JobPatchInput, JobSummary } from '../shared/schemas/jobs';
 import { api } from './api-client';
 
@@ -14,9 +15,19 @@ export const jobKeys = {
   lists: () => [...jobKeys.all, 'list'] as const,
   list: (params: JobListParams) => [...jobKeys.lists(), params] as const,
   detail: (id: string) => [...jobKeys.all, 'detail', id] as const,
+  activity: (id: string) => [...jobKeys.all, 'activity', id] as const,
 };
 
 const jobPath = (id: string) => `/jobs/${encodeURIComponent(id)}`;
+
+/** Who changed what on the job and its runs. */
+export function useJobActivityQuery(id: string | undefined) {
+  return useQuery({
+    queryKey: jobKeys.activity(id ?? ''),
+    queryFn: async () => (await api.get<{ items: ActivityView[] }>(`${jobPath(id!)}/activity`)).items,
+    enabled: Boolean(id),
+  });
+}
 
 export function useJobsQuery(params: JobListParams) {
   return useQuery({

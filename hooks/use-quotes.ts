@@ -1,3 +1,4 @@
+import type { ActivityView } from '../shared/schemas/activity';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { QuoteInput, QuoteSummary, QuoteView } from '../shared/schemas/quotes';
 import { api } from './api-client';
@@ -14,9 +15,19 @@ export const quoteKeys = {
   list: () => [...quoteKeys.all, 'list'] as const,
   detail: (id: string) => [...quoteKeys.all, 'detail', id] as const,
   preview: (id: string) => [...quoteKeys.all, 'preview', id] as const,
+  activity: (id: string) => [...quoteKeys.all, 'activity', id] as const,
 };
 
 const path = (id: string) => `/quotes/${encodeURIComponent(id)}`;
+
+/** Who created, edited and sent the quote. */
+export function useQuoteActivityQuery(id: string | undefined) {
+  return useQuery({
+    queryKey: quoteKeys.activity(id ?? ''),
+    queryFn: async () => (await api.get<{ items: ActivityView[] }>(`${path(id!)}/activity`)).items,
+    enabled: Boolean(id),
+  });
+}
 
 export function useQuotesQuery() {
   return useQuery({

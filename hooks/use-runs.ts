@@ -1,3 +1,4 @@
+import type { ActivityView } from '../shared/schemas/activity';
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { CompareView, RunCreateInput, RunPatchInput, RunView } from '../shared/schemas/jobs';
 import { api } from './api-client';
@@ -7,9 +8,19 @@ export const runKeys = {
   all: ['runs'] as const,
   detail: (id: string) => [...runKeys.all, 'detail', id] as const,
   compare: (id: string, alloyIds: string[]) => [...runKeys.all, 'compare', id, alloyIds] as const,
+  activity: (id: string) => [...runKeys.all, 'activity', id] as const,
 };
 
 const runPath = (id: string) => `/runs/${encodeURIComponent(id)}`;
+
+/** Who changed what on the run. */
+export function useRunActivityQuery(id: string | undefined) {
+  return useQuery({
+    queryKey: runKeys.activity(id ?? ''),
+    queryFn: async () => (await api.get<{ items: ActivityView[] }>(`${runPath(id!)}/activity`)).items,
+    enabled: Boolean(id),
+  });
+}
 
 /** A run's change shows in its job, the job list's totals and every comparison of it. */
 function useInvalidateRuns() {

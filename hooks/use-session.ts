@@ -11,10 +11,11 @@ export const sessionKeys = {
 export function useSessionQuery() {
   return useQuery({
     queryKey: sessionKeys.me(),
+    // Signed out, the server answers 200 { user: null }; a 401 is still read as signed out.
     queryFn: async (): Promise<PublicUser | null> => {
       try {
-        const { user } = await api.get<{ user: PublicUser }>('/auth/me');
-        return user;
+        const { user } = await api.get<{ user: PublicUser | null }>('/auth/me');
+        return user ?? null;
       } catch (error) {
         if (isApiError(error) && error.kind === 'signed_out') return null;
         throw error;

@@ -3,38 +3,11 @@
 const fs = require('node:fs');
 const os = require('node:os');
 const path = require('node:path');
-const net = require('node:net');
 const { spawnSync } = require('node:child_process');
 const { ensureWebBuild } = require('./web-build');
-const { startServer } = require('./server-process');
+const { freePort, startServer, waitForHealth } = require('./server-process');
 
 const root = path.resolve(__dirname, '..');
-
-function freePort() {
-  return new Promise((resolve, reject) => {
-    const srv = net.createServer();
-    srv.listen(0, '127.0.0.1', () => {
-      const { port } = srv.address();
-      srv.close(() => resolve(port));
-    });
-    srv.on('error', reject);
-  });
-}
-
-async function waitForHealth(url, server, timeoutMs = 30_000) {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    if (server.exitCode !== null) throw new Error(`the server exited with code ${server.exitCode}`);
-    try {
-      const res = await fetch(`${url}/api/health`);
-      if (res.ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error(`the server did not answer ${url}/api/health within ${timeoutMs} ms`);
-}
 
 async function main() {
   if (!fs.existsSync('/usr/bin/chromium')) {

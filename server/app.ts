@@ -1,12 +1,16 @@
 import express from 'express';
 import helmet from 'helmet';
 import type { DataSource } from 'typeorm';
+import type { TrustProxy } from './config';
 import { authRouter } from './auth/auth.router';
 import { AuthService } from './auth/auth.service';
 import { createLucia } from './auth/lucia';
 import { loadSession } from './auth/session';
-import { DEFAULT_SIGN_IN_LIMITS, type SignInLimits } from './auth/sign-in-limits';
+import { KnownAddressesRepository } from './auth/known-addresses.repository';
+import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './auth/sign-in-limits';
 import { apiNotFound, errorHandler } from './http/error-handler';
+import { DEFAULT_PUBLIC_LIMITS, publicLimiters, type PublicLimits } from './http/public-limits';
+import { requestGuards } from './http/request-guards';
 import { requireSameOrigin } from './http/same-origin';
 import { UsersRepository } from './users/users.repository';
 import { usersRouter } from './users/users.router';
@@ -18,6 +22,7 @@ import { catalogueRouter } from './catalogue/catalogue.router';
 import { CatalogueStore } from './catalogue/catalogue.repository';
 import { CatalogueService } from './catalogue/catalogue.service';
 import { CatalogueCsvService } from './catalogue/catalogue-csv.service';
+import { ImportJobs } from './catalogue/csv-import/import-jobs';
 import { datasheetsRouter } from './datasheets/datasheets.router';
 import { DatasheetsService } from './datasheets/datasheets.service';
 import { FlexPartsRepository } from './flex-parts/flex-parts.repository';
@@ -49,15 +54,18 @@ export interface AppOptions {
   mailer: Mailer;
   webDir?: string;
   publicUrl?: string;
-  trustProxy?: boolean;
-  signInLimits?: SignInLimits;
+  /** Proxy hops (or proxy addresses) whose X-Forwarded-For and -Proto are believed; see README. */
+  trustProxy?: TrustProxy;
+  signInLimits?: Partial<SignInLimits>;
+  publicLimits?: Partial<PublicLimits>;
 }
 
 /** Builds the whole Express app on an open DataSource without listening (tests use it directly). */
 export function createApp(dataSource: DataSource, options: AppOptions) {
   const auth = createLucia(dataSource);
   const usersRepository = new UsersRepository(dataSource);
-  const authService = new AuthService(usersRepository, auth);
+  const signInLimiter = new SignInLimiter({ ...DEFAULT_SIGN_IN_LIMITS, ...options.signInLimits });
+  const authService = new AuthService(usersRepository, auth, signInLimiter, new KnownAddressesRepository(dataSource), options.mailer);
   const usersService = new UsersService(usersRepository, auth);
   const catalogueStore = new CatalogueStore(dataSource);
   const catalogueService = new CatalogueService(catalogueStore);
@@ -66,7 +74,7 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
 
   const app = express();
   app.disable('x-powered-by');
-  if (options.trustProxy) app.set('trust proxy', 1);
+  app.set('trust proxy', options.trustProxy ?? false);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -79,17 +87,24 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
           'upgrade-insecure-requests': null,
         },
       },
+      // Sent only over HTTPS, below: over plain HTTP it means nothing and can lock a browser out of the host.
+      strictTransportSecurity: false,
     }),
   );
+  app.use((req, res, next) => {
+    if (req.secure) res.setHeader('Strict-Transport-Security', 'max-age=31536000; includeSubDomains');
+    next();
+  });
 
   const api = express.Router();
+  api.use(requestGuards);
   api.use(express.json({ limit: '1mb' }));
   api.use(requireSameOrigin(options.publicUrl));
   api.use(loadSession(auth));
   api.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
   });
-  api.use('/auth', authRouter(auth, authService, options.signInLimits ?? DEFAULT_SIGN_IN_LIMITS));
+  api.use('/auth', authRouter(auth, authService));
   api.use('/users', usersRouter(usersService));
   const shopSettings = new ShopSettingsService(dataSource);
   api.use('/calc', calcRouter(new CalcService(catalogueService, flexPartsService, shopSettings)));
@@ -101,10 +116,10 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.use('/currency-rates', currencyRatesRouter(currencyRates));
   api.use('/settings', shopSettingsRouter(shopSettings));
   api.use('/quotes', quotesRouter(quotes, options.publicUrl));
-  api.use('/public', publicQuotesRouter(quotes, options.publicUrl));
+  api.use('/public', ...publicLimiters({ ...DEFAULT_PUBLIC_LIMITS, ...options.publicLimits }), publicQuotesRouter(quotes, options.publicUrl));
   api.use('/outbox', outboxRouter(new OutboxRepository(dataSource)));
   api.use('/me', preferencesRouter(new PreferencesService(new PreferencesRepository(dataSource))));
-  api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore)));
+  api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore, new ImportJobs())));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

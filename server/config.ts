@@ -1,9 +1,36 @@
+import net from 'node:net';
 import path from 'node:path';
 import { z } from 'zod';
 
 const booleanFlag = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'], { error: 'use true or false' })
   .transform((v) => v === 'true' || v === '1' || v === 'yes');
+
+/** What express may trust in X-Forwarded-*: nothing, exactly N proxy hops, or proxies at these addresses. */
+export type TrustProxy = false | number | string[];
+
+const PROXY_NAMES = new Set(['loopback', 'linklocal', 'uniquelocal']);
+const isProxyAddress = (item: string) => {
+  if (PROXY_NAMES.has(item)) return true;
+  const [address, bits, ...rest] = item.split('/');
+  const family = net.isIP(address);
+  return family !== 0 && rest.length === 0 && (bits === undefined || (/^\d+$/.test(bits) && Number(bits) <= (family === 4 ? 32 : 128)));
+};
+
+const trustProxySchema = z.string().transform((raw, ctx): TrustProxy => {
+  const value = raw.trim().toLowerCase();
+  if (['false', 'no', '0'].includes(value)) return false;
+  if (/^\d+$/.test(value) && Number(value) <= 10) return Number(value);
+  const items = value.split(',').map((item) => item.trim()).filter(Boolean);
+  if (value !== 'true' && value !== 'yes' && items.length > 0 && items.every(isProxyAddress)) return items;
+  ctx.addIssue({
+    code: 'custom',
+    message:
+      'give the number of proxies in front of Dilato (e.g. 1), or their addresses (e.g. loopback or 10.0.0.5), or false; ' +
+      '"true" is not accepted because it would let anyone reaching Dilato directly forge their address',
+  });
+  return z.NEVER;
+});
 
 const envSchema = z.object({
   PORT: z.coerce
@@ -17,7 +44,7 @@ const envSchema = z.object({
   SEED_CATALOGUE: booleanFlag.default(true),
   SMTP_URL: z.url({ protocol: /^smtps?$/, error: 'must be an smtp:// or smtps:// URL' }).optional(),
   PUBLIC_URL: z.url({ protocol: /^https?$/, error: 'must be an http:// or https:// URL' }).optional(),
-  TRUST_PROXY: booleanFlag.default(false),
+  TRUST_PROXY: trustProxySchema.default(false),
   WEB_DIR: z.string().min(1).optional(),
 });
 
@@ -31,7 +58,7 @@ export interface Config {
   seedCatalogue: boolean;
   smtpUrl?: string;
   publicUrl?: string;
-  trustProxy: boolean;
+  trustProxy: TrustProxy;
 }
 
 export class ConfigError extends Error {}

@@ -2,6 +2,7 @@ import fs from 'node:fs';
 import type { Server } from 'node:http';
 import { createApp } from './app';
 import { ConfigError, loadConfig } from './config';
+import { answerClientErrors } from './http/request-guards';
 import { openDatabase } from './db/data-source';
 import { seed } from './seed/seed';
 import { startFakeSmtp } from './mail/fake-smtp';
@@ -32,6 +33,8 @@ async function main() {
         `seeded: ${report.alloys} alloys, ${report.sources} sources, ${report.flexParts} flex parts, ${report.demoUsers} demo users, ${report.demoJobs ?? 0} demo jobs; ready in ${Date.now() - startedAt} ms)`,
     );
   });
+
+  answerClientErrors(server);
 
   const stop = () => {
     server.close(() => {

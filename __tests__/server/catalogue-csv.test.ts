@@ -2,6 +2,7 @@ import Papa from 'papaparse';
 import { CSV_COLUMNS, CSV_EXPORT_ONLY_COLUMNS } from '../../shared/catalogue/catalogue-csv';
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import { createTestApp, expectErrorShape, signedIn, type TestApp } from './test-app';
+import { importCsv } from './import-helpers';
 
 let t: TestApp;
 beforeEach(async () => {
@@ -45,12 +46,11 @@ describe('catalogue CSV', () => {
   it('when the export is imported unchanged, then nothing is drafted', async () => {
     const eng = await signedIn(t.app, 'engineer');
     const csv = (await (await signedIn(t.app, 'fabricator')).get('/api/alloys/export.csv')).text;
-    const res = await eng.post('/api/alloys/import').set('Content-Type', 'text/csv').send(csv);
-    expect(res.status).toBe(200);
-    expect(res.body.created).toEqual([]);
-    expect(res.body.updated).toEqual([]);
-    expect(res.body.refused).toEqual([]);
-    expect(res.body.unchanged.length).toBeGreaterThanOrEqual(15);
+    const report = (await importCsv(eng, csv)).report!;
+    expect(report.created).toEqual([]);
+    expect(report.updated).toEqual([]);
+    expect(report.refused).toEqual([]);
+    expect(report.unchanged.length).toBeGreaterThanOrEqual(15);
   });
 
   it('when rows are good, bad, or contradict each other, then good alloys become drafts and each bad row is reported by line', async () => {
@@ -65,14 +65,13 @@ describe('catalogue CSV', () => {
     const csv = Papa.unparse({ fields: [...CSV_COLUMNS], data: all.map((r) => CSV_COLUMNS.map((c) => r[c])) });
 
     const eng = await signedIn(t.app, 'engineer');
-    const res = await eng.post('/api/alloys/import').set('Content-Type', 'text/csv').send(csv);
-    expect(res.status).toBe(200);
-    expect(res.body.updated).toEqual(['S34700']);
-    expect(res.body.created).toEqual(['S34709']);
-    const refusedUns = res.body.refused.map((r: { uns: string }) => r.uns);
+    const report = (await importCsv(eng, csv)).report!;
+    expect(report.updated).toEqual(['S34700']);
+    expect(report.created).toEqual(['S34709']);
+    const refusedUns = report.refused.map((r) => r.uns);
     expect(refusedUns).toEqual(expect.arrayContaining(['S30400', 'S43000', 'S40910']));
     const sourceLine = changed.length + fresh.length + 2; // header is line 1
-    expect(res.body.refused.find((r: { uns: string }) => r.uns === 'S30400')).toMatchObject({ line: sourceLine, message: expect.stringMatching(/Unknown source/) });
+    expect(report.refused.find((r) => r.uns === 'S30400')).toMatchObject({ line: sourceLine, message: expect.stringMatching(/Unknown source/) });
 
     // The published data does not move until an admin publishes the drafts.
     const fab = await signedIn(t.app, 'fabricator');

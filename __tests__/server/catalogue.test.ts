@@ -331,3 +331,26 @@ describe('flex parts', () => {
     expect(Object.keys(res.body.error.fields)).toEqual(expect.arrayContaining(['code', 'name', 'boreMm', 'liveLengthMm']));
   });
 });
+
+describe('revisions of drafts', () => {
+  it('when a published alloy has an open draft, then only engineers and admins see its edits in the history', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const admin = await signedIn(t.app, 'admin');
+    const { id } = await alloyByUns('S34700');
+    const price = (await eng.get(`/api/alloys/${id}`)).body.alloy.published.pricePerKg as number;
+    expect((await eng.patch(`/api/alloys/${id}`).send({ pricePerKg: 99.5, note: 'Unreleased price' })).status).toBe(200);
+
+    const seen = async (role: Role) => JSON.stringify((await (await signedIn(t.app, role)).get(`/api/alloys/${id}/revisions`)).body.items);
+    for (const role of ['fabricator', 'sales'] as const) {
+      const text = await seen(role);
+      expect(text).not.toMatch(/99\.5/);
+      expect(text).not.toMatch(/Unreleased price/);
+    }
+    for (const role of ['engineer', 'admin'] as const) expect(await seen(role)).toMatch(/99\.5/);
+
+    // Once published, the version's history is everyone's.
+    expect((await admin.post(`/api/alloys/${id}/publish`).send({ note: 'Released' })).status).toBe(200);
+    expect(await seen('sales')).toMatch(/99\.5/);
+    expect(price).not.toBe(99.5);
+  });
+});

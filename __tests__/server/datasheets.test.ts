@@ -183,3 +183,31 @@ describe('who may upload and download', () => {
     expect((await fab.get(`/api/datasheets/${sheet.id}`)).status).toBe(404);
   });
 });
+
+describe('download type and name', () => {
+  it.each([
+    ['sheet.html', 'sheet.pdf'],
+    ['drawing.svg', 'drawing.pdf'],
+    ['report', 'report.pdf'],
+    ['invoice\u202Efdp.exe', 'invoicefdp.pdf'],
+    ['\u2066spec\u2069 \u200Fsheet\uFEFF.PDF', 'spec sheet.pdf'],
+  ])('when a PDF is uploaded as %j, then it downloads as application/pdf named %j', async (uploadedAs, expected) => {
+    const eng = await signedIn(t.app, 'engineer');
+    const up = await eng.post(`/api/alloys/${await alloyId()}/datasheets`).attach('file', PDF, { filename: uploadedAs, contentType: 'text/html' });
+    expect(up.status).toBe(201);
+    expect(up.body.datasheet.originalName).toBe(expected);
+    const download = await (await signedIn(t.app, 'sales')).get(`/api/datasheets/${up.body.datasheet.id}`).buffer(true);
+    expect(download.headers['content-type']).toBe('application/pdf');
+    expect(download.headers['content-disposition'].replace(/"/g, '')).toBe(`attachment; filename=${expected}`);
+    expect(download.headers['x-content-type-options']).toBe('nosniff');
+  });
+
+  it('when a row stored before names its file .html, then the download is still a PDF named .pdf', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const up = await eng.post(`/api/alloys/${await alloyId()}/datasheets`).attach('file', PDF, { filename: 'old.pdf', contentType: 'application/pdf' });
+    await t.dataSource.query(`UPDATE datasheet SET original_name = 'old\u202Elmth.html' WHERE id = ?`, [up.body.datasheet.id]);
+    const download = await eng.get(`/api/datasheets/${up.body.datasheet.id}`).buffer(true);
+    expect(download.headers['content-type']).toBe('application/pdf');
+    expect(download.headers['content-disposition'].replace(/"/g, '')).toBe('attachment; filename=oldlmth.pdf');
+  });
+});

@@ -30,6 +30,16 @@ describe('configuration', () => {
   it('when SEED_DEMO=false, then demo seeding is off', () => {
     expect(loadConfig({ SEED_DEMO: 'false' }).seedDemo).toBe(false);
   });
+
+  it('when TRUST_PROXY is a hop count or proxy addresses, then exactly those are trusted; "true" or junk stops start-up', () => {
+    expect(loadConfig({}).trustProxy).toBe(false);
+    expect(loadConfig({ TRUST_PROXY: 'false' }).trustProxy).toBe(false);
+    expect(loadConfig({ TRUST_PROXY: '2' }).trustProxy).toBe(2);
+    expect(loadConfig({ TRUST_PROXY: 'loopback, 10.0.0.0/8,fd00::1' }).trustProxy).toEqual(['loopback', '10.0.0.0/8', 'fd00::1']);
+    expect(() => loadConfig({ TRUST_PROXY: 'true' })).toThrow(/TRUST_PROXY: give the number of proxies/);
+    expect(() => loadConfig({ TRUST_PROXY: '10.0.0.0/33' })).toThrow(/TRUST_PROXY/);
+    expect(() => loadConfig({ TRUST_PROXY: 'proxy.example' })).toThrow(/TRUST_PROXY/);
+  });
 });
 
 describe('database', () => {

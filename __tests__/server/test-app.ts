@@ -34,7 +34,7 @@ export async function createTestApp(options: TestOptions = {}): Promise<TestApp>
   const uploadsDir = options.uploadsDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-uploads-'));
   const smtp = await startFakeSmtp(new OutboxRepository(dataSource));
   const mailer = new Mailer(smtp.url);
-  const app = createApp(dataSource, { ...options, uploadsDir, mailer });
+  const app = createApp(dataSource, { ...options, uploadsDir, mailer: options.mailer ?? mailer });
   return {
     app,
     dataSource,

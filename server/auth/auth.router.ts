@@ -3,15 +3,14 @@ import { signInSchema } from '../../shared/schemas/auth';
 import { parseBody } from '../http/validate';
 import type { AuthService } from './auth.service';
 import type { Auth } from './lucia';
-import { currentUser, writeSessionCookie } from './session';
-import { signInLimiters, type SignInLimits } from './sign-in-limits';
+import { writeSessionCookie } from './session';
 
-export function authRouter(auth: Auth, service: AuthService, limits: SignInLimits): Router {
+export function authRouter(auth: Auth, service: AuthService): Router {
   const router = Router();
 
-  router.post('/sign-in', ...signInLimiters(limits), async (req, res) => {
+  router.post('/sign-in', async (req, res) => {
     const input = parseBody(signInSchema, req.body);
-    const { user, sessionId } = await service.signIn(input);
+    const { user, sessionId } = await service.signIn(input, req.ip);
     writeSessionCookie(auth, req, res, sessionId);
     res.json({ user });
   });
@@ -22,8 +21,9 @@ export function authRouter(auth: Auth, service: AuthService, limits: SignInLimit
     res.status(204).end();
   });
 
+  // Asked on every page load: being signed out is an answer, not an error.
   router.get('/me', (req, res) => {
-    res.json({ user: currentUser(req) });
+    res.json({ user: req.user ?? null });
   });
 
   return router;

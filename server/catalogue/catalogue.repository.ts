@@ -33,6 +33,9 @@ export class CatalogueRepository {
   findVersions(ids: string[]) {
     return ids.length === 0 ? Promise.resolve([]) : this.m.findBy(AlloyVersion, { id: In(ids) });
   }
+  versionsOf(alloyId: string) {
+    return this.m.find(AlloyVersion, { where: { alloyId }, select: { id: true, version: true, state: true } });
+  }
   findVersionByNumber(alloyId: string, version: number) {
     return this.m.findOneBy(AlloyVersion, { alloyId, version });
   }
@@ -52,6 +55,10 @@ export class CatalogueRepository {
     return versionIds.length === 0
       ? Promise.resolve([])
       : this.m.find(PropertyPoint, { where: { versionId: In(versionIds) }, order: { tempC: 'ASC' } });
+  }
+  /** Plain INSERTs for rows known to be new (no read-before-write, no reload), e.g. a large import. */
+  async insertNew<T extends object>(entity: new () => T, rows: T[]) {
+    if (rows.length > 0) await this.m.createQueryBuilder().insert().into(entity).values(rows as never).updateEntity(false).execute();
   }
   async replacePoints(versionId: string, kind: PropertyKind, points: PropertyPoint[]) {
     await this.m.delete(PropertyPoint, { versionId, kind });

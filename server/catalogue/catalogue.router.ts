@@ -1,13 +1,25 @@
-import express, { Router } from 'express';
+import express, { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
+import { MAX_IMPORT_BYTES } from '../../shared/catalogue/catalogue-csv';
 import { alloyInputSchema, alloyListQuerySchema, alloyPatchSchema, sourceInputSchema } from '../../shared/schemas/alloy';
 import { requireRole, requireSignedIn } from '../auth/session';
 import { AppError } from '../http/app-error';
-import { fieldsFromZod, parseBody } from '../http/validate';
+import { fieldsFromZod, parseBody, parsePatch } from '../http/validate';
 import type { CatalogueCsvService } from './catalogue-csv.service';
 import type { CatalogueService } from './catalogue.service';
 
-const noteSchema = z.object({ note: z.string().trim().max(500).default('') });
+const noteSchema = z.object({ note: z.string({ error: 'The note must be text' }).trim().max(500, { error: 'Use at most 500 characters' }).default('') });
+const createSchema = alloyInputSchema.extend(noteSchema.shape);
+
+/** The CSV body, with a refusal that says how large a file may be. */
+const csvBody: RequestHandler = (req, res, next) => {
+  express.text({ type: ['text/csv', 'text/plain'], limit: MAX_IMPORT_BYTES })(req, res, (err?: unknown) => {
+    if ((err as { type?: string } | undefined)?.type !== 'entity.too.large') return next(err);
+    const mb = (bytes: number) => `${(bytes / 1024 / 1024).toFixed(1)} MB`;
+    const size = Number(req.headers['content-length']);
+    next(new AppError(413, 'too_large', `A CSV import may be at most ${mb(MAX_IMPORT_BYTES)}${size ? `; this file is ${mb(size)}` : ''}. Split it into smaller files.`, { file: `Larger than ${mb(MAX_IMPORT_BYTES)}` }));
+  });
+};
 
 export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvService): Router {
   const router = Router();
@@ -24,16 +36,22 @@ export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvServ
     res.type('text/csv; charset=utf-8').attachment('dilato-catalogue.csv').send(await csv.export(req.user!));
   });
 
-  router.post('/alloys/import', editors, express.text({ type: ['text/csv', 'text/plain'], limit: '5mb' }), async (req, res) => {
+  // Answers 202 at once; the client polls the import until it is done.
+  router.post('/alloys/import', editors, csvBody, (req, res) => {
     if (typeof req.body !== 'string' || req.body.trim() === '') {
       throw AppError.badRequest('invalid_csv', 'Send the CSV as the request body (text/csv).', { file: 'Empty or not CSV' });
     }
-    res.json(await csv.import(req.body, req.user!));
+    const job = csv.startImport(req.body, req.user!);
+    res.status(202).location(`/api/alloys/imports/${job.id}`).json({ import: job });
+  });
+
+  router.get('/alloys/imports/:id', editors, (req, res) => {
+    res.json({ import: csv.importStatus(req.params.id as string) });
   });
 
   router.post('/alloys', editors, async (req, res) => {
-    const { note } = noteSchema.parse({ note: (req.body as { note?: unknown })?.note ?? '' });
-    res.status(201).json({ alloy: await service.create(parseBody(alloyInputSchema, req.body), req.user!, note) });
+    const { note, ...input } = parseBody(createSchema, req.body);
+    res.status(201).json({ alloy: await service.create(input, req.user!, note) });
   });
 
   router.get('/alloys/:id', requireSignedIn, async (req, res) => {
@@ -41,7 +59,7 @@ export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvServ
   });
 
   router.patch('/alloys/:id', editors, async (req, res) => {
-    res.json({ alloy: await service.patch(req.params.id as string, parseBody(alloyPatchSchema, req.body), req.user!) });
+    res.json({ alloy: await service.patch(req.params.id as string, parsePatch(alloyPatchSchema, req.body), req.user!) });
   });
 
   router.get('/alloys/:id/versions/:version', requireSignedIn, async (req, res) => {

@@ -158,10 +158,17 @@ export class CatalogueService {
     return versionView(row, await repo.pointsFor([row.id]));
   }
 
+  /**
+   * The alloy's history. Editors see every step; other roles only steps of versions that were
+   * published (and those of no version: retiring, data sheets), never the edits of an open draft.
+   */
   async revisions(id: string, actor: Actor): Promise<RevisionView[]> {
     const repo = this.store.read();
     await this.visibleAlloy(repo, id, actor);
-    return (await repo.revisionsFor(id)).map(revisionView);
+    const all = await repo.revisionsFor(id);
+    if (canEdit(actor)) return all.map(revisionView);
+    const released = new Set((await repo.versionsOf(id)).filter((v) => v.state !== 'draft').map((v) => v.version));
+    return all.filter((r) => r.version === null || released.has(r.version)).map(revisionView);
   }
 
   /** The change an admin reviews before publishing: the draft against the published version. */
@@ -214,96 +221,81 @@ export class CatalogueService {
   }
 
   private async writeVersionData(repo: CatalogueRepository, version: AlloyVersion, input: AlloyInput) {
-    Object.assign(version, {
-      designation: input.designation,
-      uns: input.uns,
-      family: input.family,
-      densityKgM3: input.densityKgM3,
-      densitySourceId: input.densitySourceId,
-      maxContinuousC: input.maxContinuousC,
-      maxIntermittentC: input.maxIntermittentC,
-      limitsSourceId: input.limitsSourceId,
-      pricePerKg: input.pricePerKg,
-      currency: input.currency,
-      priceSetOn: input.priceSetOn,
-      priceIsDemo: input.priceIsDemo,
-      referenceTempC: input.referenceTempC,
-      notes: input.notes,
-      dataCautions: input.dataCautions,
-      warningRanges: input.warningRanges,
-    });
+    Object.assign(version, versionFields(input));
     await repo.saveVersion(version);
+    const rows = pointRows(repo, version.id, input);
     for (const kind of ['cte', 'modulus', 'yield'] as const) {
-      const rows = (input[kind] as { tempC: number; sourceId: string }[]).map((p) =>
-        repo.create(PropertyPoint, {
-          id: randomUUID(),
-          versionId: version.id,
-          kind,
-          tempC: p.tempC,
-          value: (p as unknown as Record<string, number>)[TABLE_VALUE[kind]],
-          sourceId: p.sourceId,
-        }),
-      );
-      await repo.replacePoints(version.id, kind, rows);
+      await repo.replacePoints(version.id, kind, rows.filter((p) => p.kind === kind));
     }
   }
 
+  private revisionRow(repo: CatalogueRepository, alloyId: string, fields: Pick<AlloyRevision, 'action' | 'version' | 'note' | 'diff'>, actor: Actor) {
+    return repo.create(AlloyRevision, { id: randomUUID(), alloyId, userId: actor?.id ?? null, userName: actor?.name ?? 'Dilato seed', at: new Date(), ...fields });
+  }
+
   private revision(repo: CatalogueRepository, alloyId: string, fields: Pick<AlloyRevision, 'action' | 'version' | 'note' | 'diff'>, actor: Actor) {
-    return repo.addRevision(
-      repo.create(AlloyRevision, { id: randomUUID(), alloyId, userId: actor?.id ?? null, userName: actor?.name ?? 'Dilato seed', at: new Date(), ...fields }),
-    );
+    return repo.addRevision(this.revisionRow(repo, alloyId, fields, actor));
   }
 
   async create(input: AlloyInput, actor: Actor, note = ''): Promise<AlloyDetail> {
-    return this.store.write(async (repo) => {
-      await this.checkUnsFree(repo, input.uns, null);
-      await this.checkSources(repo, input);
-      const alloy = repo.create(Alloy, { id: randomUUID(), uns: input.uns, status: 'draft', publishedVersionId: null, draftVersionId: null });
-      await repo.saveAlloy(alloy);
-      const version = repo.create(AlloyVersion, { id: randomUUID(), alloyId: alloy.id, version: 1, state: 'draft', createdBy: actor?.id ?? null, publishedAt: null, publishedBy: null });
-      await this.writeVersionData(repo, version, input);
-      alloy.draftVersionId = version.id;
-      await repo.saveAlloy(alloy);
-      await this.revision(repo, alloy.id, { action: 'created', version: 1, note, diff: diffAlloy(null, input) }, actor);
-      return this.detailIn(repo, alloy.id, actor);
-    });
+    return this.store.write(async (repo) => this.detailIn(repo, await this.createIn(repo, input, actor, note), actor));
+  }
+
+  /** Creates the alloy as draft v1 inside the caller's transaction; returns its id. Every check runs before the first write. */
+  async createIn(repo: CatalogueRepository, input: AlloyInput, actor: Actor, note = ''): Promise<string> {
+    await this.checkUnsFree(repo, input.uns, null);
+    await this.checkSources(repo, input);
+    const alloyId = randomUUID();
+    const now = new Date();
+    const version = repo.create(AlloyVersion, { id: randomUUID(), alloyId, version: 1, state: 'draft', createdBy: actor?.id ?? null, createdAt: now, publishedAt: null, publishedBy: null });
+    await repo.insertNew(Alloy, [repo.create(Alloy, { id: alloyId, uns: input.uns, status: 'draft', publishedVersionId: null, draftVersionId: version.id, createdAt: now, updatedAt: now })]);
+    Object.assign(version, versionFields(input));
+    await repo.insertNew(AlloyVersion, [version]);
+    await repo.insertNew(PropertyPoint, pointRows(repo, version.id, input));
+    await repo.insertNew(AlloyRevision, [this.revisionRow(repo, alloyId, { action: 'created', version: 1, note, diff: diffAlloy(null, input) }, actor)]);
+    return alloyId;
   }
 
   /** Edits the open draft; on a published alloy with no draft, opens one beside the published version. */
   async patch(id: string, patch: AlloyPatch, actor: Actor): Promise<AlloyDetail> {
     return this.store.write(async (repo) => {
-      const alloy = await this.visibleAlloy(repo, id, actor);
-      const views = await this.views(repo, [alloy.draftVersionId, alloy.publishedVersionId]);
-      const base = views.get(alloy.draftVersionId ?? '') ?? views.get(alloy.publishedVersionId ?? '');
-      if (!base) throw AppError.notFound('There is no such alloy.');
-      const { note, ...changes } = patch;
-      const parsed = alloyInputSchema.safeParse({ ...stripMeta(base), ...changes });
-      if (!parsed.success) throw AppError.badRequest('invalid_input', 'Some values need attention.', fieldsFromZod(parsed.error));
-      const input = parsed.data;
-      const diff = diffAlloy(stripMeta(base), input);
-      if (diff.length === 0) throw AppError.badRequest('no_change', 'Nothing changed.');
-      await this.checkUnsFree(repo, input.uns, alloy.id);
-      await this.checkSources(repo, input);
-
-      let draft = alloy.draftVersionId ? await repo.findVersion(alloy.draftVersionId) : null;
-      if (!draft) {
-        draft = repo.create(AlloyVersion, {
-          id: randomUUID(),
-          alloyId: alloy.id,
-          version: (await repo.latestVersionNumber(alloy.id)) + 1,
-          state: 'draft',
-          createdBy: actor?.id ?? null,
-          publishedAt: null,
-          publishedBy: null,
-        });
-      }
-      await this.writeVersionData(repo, draft, input);
-      alloy.draftVersionId = draft.id;
-      alloy.uns = input.uns;
-      await repo.saveAlloy(alloy);
-      await this.revision(repo, alloy.id, { action: 'edited', version: draft.version, note: note ?? '', diff }, actor);
-      return this.detailIn(repo, alloy.id, actor);
+      await this.patchIn(repo, id, patch, actor);
+      return this.detailIn(repo, id, actor);
     });
+  }
+
+  /** The edit inside the caller's transaction; every check (and `no_change`) comes before the first write. */
+  async patchIn(repo: CatalogueRepository, id: string, patch: AlloyPatch, actor: Actor): Promise<void> {
+    const alloy = await this.visibleAlloy(repo, id, actor);
+    const views = await this.views(repo, [alloy.draftVersionId, alloy.publishedVersionId]);
+    const base = views.get(alloy.draftVersionId ?? '') ?? views.get(alloy.publishedVersionId ?? '');
+    if (!base) throw AppError.notFound('There is no such alloy.');
+    const { note, ...changes } = patch;
+    const parsed = alloyInputSchema.safeParse({ ...stripMeta(base), ...changes });
+    if (!parsed.success) throw AppError.badRequest('invalid_input', 'Some values need attention.', fieldsFromZod(parsed.error));
+    const input = parsed.data;
+    const diff = diffAlloy(stripMeta(base), input);
+    if (diff.length === 0) throw AppError.badRequest('no_change', 'Nothing changed.');
+    await this.checkUnsFree(repo, input.uns, alloy.id);
+    await this.checkSources(repo, input);
+
+    let draft = alloy.draftVersionId ? await repo.findVersion(alloy.draftVersionId) : null;
+    if (!draft) {
+      draft = repo.create(AlloyVersion, {
+        id: randomUUID(),
+        alloyId: alloy.id,
+        version: (await repo.latestVersionNumber(alloy.id)) + 1,
+        state: 'draft',
+        createdBy: actor?.id ?? null,
+        publishedAt: null,
+        publishedBy: null,
+      });
+    }
+    await this.writeVersionData(repo, draft, input);
+    alloy.draftVersionId = draft.id;
+    alloy.uns = input.uns;
+    await repo.saveAlloy(alloy);
+    await this.revision(repo, alloy.id, { action: 'edited', version: draft.version, note: note ?? '', diff }, actor);
   }
 
   async publish(id: string, actor: Actor, note = ''): Promise<AlloyDetail> {
@@ -355,6 +347,42 @@ export class CatalogueService {
       return sourceView(await repo.saveSource(source));
     });
   }
+}
+
+function versionFields(input: AlloyInput): Partial<AlloyVersion> {
+  return {
+    designation: input.designation,
+    uns: input.uns,
+    family: input.family,
+    densityKgM3: input.densityKgM3,
+    densitySourceId: input.densitySourceId,
+    maxContinuousC: input.maxContinuousC,
+    maxIntermittentC: input.maxIntermittentC,
+    limitsSourceId: input.limitsSourceId,
+    pricePerKg: input.pricePerKg,
+    currency: input.currency,
+    priceSetOn: input.priceSetOn,
+    priceIsDemo: input.priceIsDemo,
+    referenceTempC: input.referenceTempC,
+    notes: input.notes,
+    dataCautions: input.dataCautions,
+    warningRanges: input.warningRanges,
+  };
+}
+
+function pointRows(repo: CatalogueRepository, versionId: string, input: AlloyInput): PropertyPoint[] {
+  return (['cte', 'modulus', 'yield'] as const).flatMap((kind) =>
+    (input[kind] as { tempC: number; sourceId: string }[]).map((p) =>
+      repo.create(PropertyPoint, {
+        id: randomUUID(),
+        versionId,
+        kind,
+        tempC: p.tempC,
+        value: (p as unknown as Record<string, number>)[TABLE_VALUE[kind]],
+        sourceId: p.sourceId,
+      }),
+    ),
+  );
 }
 
 /** A version view without its bookkeeping, i.e. the alloy input it holds. */

@@ -32,9 +32,10 @@ export function datasheetsRouter(service: DatasheetsService, uploadsDir: string)
 
   router.get('/datasheets/:id', requireSignedIn, async (req, res) => {
     const file = await service.forDownload(req.params.id as string, req.user!);
+    // attachment() picks a type from the name's extension, so the PDF type is set after it.
+    res.attachment(file.originalName);
     res.setHeader('Content-Type', 'application/pdf');
     res.setHeader('Content-Length', String(file.sizeBytes));
-    res.attachment(file.originalName);
     res.sendFile(file.path);
   });
 

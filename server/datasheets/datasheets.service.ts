@@ -9,11 +9,16 @@ import { datasheetView } from '../catalogue/catalogue.views';
 import { AppError } from '../http/app-error';
 import type { StoredFile } from './pdf-storage';
 
-/** Keeps what a person typed as a file name only as display text: no paths, no control characters. */
+/**
+ * Keeps what a person typed as a file name only as display text: no paths, no control or
+ * format characters (U+202E and the other bidirectional overrides could make "fdp.exe" read as "exe.pdf"),
+ * and always a .pdf name, because the file is always served as a PDF.
+ */
 export function cleanOriginalName(name: string): string {
   const base = name.split(/[\\/]/).pop() ?? '';
-  const cleaned = base.replace(/[\u0000-\u001f\u007f]/g, '').trim().slice(0, 200);
-  return cleaned.length > 0 ? cleaned : 'datasheet.pdf';
+  const cleaned = base.replace(/[\p{Cc}\p{Cf}\u2028\u2029]/gu, '').trim();
+  const stem = cleaned.replace(/\.[^.]*$/, '').trim().slice(0, 196) || 'datasheet';
+  return `${stem}.pdf`;
 }
 
 export class DatasheetsService {
@@ -72,6 +77,6 @@ export class DatasheetsService {
     if (!sheet || !alloy || (!alloy.publishedVersionId && !canEdit(actor))) throw AppError.notFound('There is no such data sheet.');
     const file = path.join(this.uploadsDir, sheet.storedName);
     if (!fs.existsSync(file)) throw AppError.notFound('The data sheet file is missing from storage.');
-    return { path: file, originalName: sheet.originalName, sizeBytes: sheet.sizeBytes };
+    return { path: file, originalName: cleanOriginalName(sheet.originalName), sizeBytes: sheet.sizeBytes };
   }
 }

@@ -8,6 +8,10 @@ import { UserPreference } from '../preferences/user-preference.entity';
 import { MailMessage } from '../mail/mail-message.entity';
 import { Quote, QuoteEvent } from '../quotes/quote.entities';
 import { ShopSettingsRow } from '../settings/shop-settings.entity';
+import { SignInAddress } from '../auth/sign-in-address.entity';
+import { ActivityEntry } from '../activity/activity.entity';
+import { Activity1764600610000 } from './migrations/1764600610000-activity';
+import { SignInAddresses1764600600000 } from './migrations/1764600600000-sign-in-addresses';
 import { QuotesAndMail1764600300000 } from './migrations/1764600300000-quotes-and-mail';
 import { Jobs1764600200000 } from './migrations/1764600200000-jobs';
 import { UserPreferences1764600210000 } from './migrations/1764600210000-user-preferences';
@@ -18,7 +22,26 @@ import { AlloyDataCautions1764600500000 } from './migrations/1764600500000-alloy
 import { CurrencyRates1764600510000 } from './migrations/1764600510000-currency-rates';
 import { CurrencyRate } from '../currency/currency-rate.entity';
 
-export const ENTITIES = [User, Source, Alloy, AlloyVersion, PropertyPoint, AlloyRevision, Datasheet, FlexPartRow, Job, JobRun, UserPreference, MailMessage, ShopSettingsRow, Quote, QuoteEvent, CurrencyRate];
+export const ENTITIES = [
+  User,
+  Source,
+  Alloy,
+  AlloyVersion,
+  PropertyPoint,
+  AlloyRevision,
+  Datasheet,
+  FlexPartRow,
+  Job,
+  JobRun,
+  UserPreference,
+  MailMessage,
+  ShopSettingsRow,
+  Quote,
+  QuoteEvent,
+  CurrencyRate,
+  SignInAddress,
+  ActivityEntry,
+];
 export const MIGRATIONS = [
   UsersAndSessions1764600000000,
   Catalogue1764600100000,
@@ -28,6 +51,8 @@ export const MIGRATIONS = [
   FlexPartRatings1764600400000,
   AlloyDataCautions1764600500000,
   CurrencyRates1764600510000,
+  SignInAddresses1764600600000,
+  Activity1764600610000,
 ];
 
 /** `database` is a file path, or ':memory:' for tests. */

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { flexPartInputSchema, flexPartPatchSchema } from '../../shared/schemas/alloy';
 import { requireRole, requireSignedIn } from '../auth/session';
-import { parseBody } from '../http/validate';
+import { parseBody, parsePatch } from '../http/validate';
 import type { FlexPartsService } from './flex-parts.service';
 
 export function flexPartsRouter(service: FlexPartsService): Router {
@@ -17,7 +17,7 @@ export function flexPartsRouter(service: FlexPartsService): Router {
   });
 
   router.patch('/:id', requireRole('admin'), async (req, res) => {
-    res.json({ flexPart: await service.update(req.params.id as string, parseBody(flexPartPatchSchema, req.body)) });
+    res.json({ flexPart: await service.update(req.params.id as string, parsePatch(flexPartPatchSchema, req.body)) });
   });
 
   return router;

@@ -1,4 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { ZodError } from 'zod';
+import { fieldsFromZodError } from '../../shared/schemas/field-errors';
+import { isUniqueViolation } from '../db/errors';
 import type { ApiErrorBody } from '../../shared/schemas/api-error';
 import { AppError } from './app-error';
 
@@ -23,6 +26,15 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     });
     return;
   }
+  // Safety nets: a schema applied without parseBody, or a race that only the database saw.
+  if (err instanceof ZodError) {
+    send(res, 400, { error: { code: 'invalid_input', message: 'Some values need attention.', fields: fieldsFromZodError(err) } });
+    return;
+  }
+  if (isUniqueViolation(err)) {
+    send(res, 409, { error: { code: 'conflict', message: 'This clashes with a record that already exists; reload and try again.' } });
+    return;
+  }
   const type = (err as { type?: string }).type;
   const status = (err as { status?: number }).status;
   if (type === 'entity.parse.failed') {
@@ -30,7 +42,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     return;
   }
   if (type === 'entity.too.large' || status === 413) {
-    send(res, 413, { error: { code: 'too_large', message: 'The request is too large.' } });
+    send(res, 413, { error: { code: 'too_large', message: 'The request is too large: a request body may be at most 1 MB.' } });
     return;
   }
   if (typeof status === 'number' && status >= 400 && status < 500) {

@@ -4,21 +4,22 @@ import { AppError } from './app-error';
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
 
 /**
- * Every state-changing request must carry an Origin header naming this server: a missing
- * or foreign Origin is refused, which stops cross-site form posts riding on the session cookie.
+ * Every state-changing request must carry an Origin header naming this server, scheme included
+ * (https://host is not http://host): a missing or foreign Origin is refused, which stops
+ * cross-site form posts riding on the session cookie.
  */
 export function requireSameOrigin(publicUrl?: string): RequestHandler {
-  const allowed = publicUrl ? new URL(publicUrl).host : undefined;
+  const configured = publicUrl ? new URL(publicUrl).origin : undefined;
   return (req, _res, next) => {
     if (SAFE_METHODS.has(req.method)) return next();
-    const origin = req.headers.origin;
-    let host: string | undefined;
+    let origin: string | undefined;
     try {
-      host = origin ? new URL(origin).host : undefined;
+      origin = req.headers.origin ? new URL(req.headers.origin).origin : undefined;
     } catch {
-      host = undefined;
+      origin = undefined;
     }
-    if (!host || (host !== req.headers.host && host !== allowed)) {
+    const own = `${req.protocol}://${req.headers.host}`;
+    if (!origin || (origin !== own && origin !== configured)) {
       return next(new AppError(403, 'foreign_origin', 'This request did not come from Dilato itself.'));
     }
     next();

@@ -11,3 +11,13 @@ export function parseBody<S extends z.ZodType>(schema: S, body: unknown): z.outp
   }
   return result.data;
 }
+
+/**
+ * A PATCH body: parsed like any other, then cut down to the top-level fields the request named,
+ * so that defaults in the schema (e.g. `active: true`) never reset what the caller left out.
+ */
+export function parsePatch<S extends z.ZodType>(schema: S, body: unknown): Partial<z.output<S>> {
+  const parsed = parseBody(schema, body) as Record<string, unknown>;
+  const named = typeof body === 'object' && body !== null ? new Set(Object.keys(body)) : new Set<string>();
+  return Object.fromEntries(Object.entries(parsed).filter(([key]) => named.has(key))) as Partial<z.output<S>>;
+}

@@ -3,12 +3,18 @@ import type { JobListQuery } from '../../shared/schemas/jobs';
 import { User } from '../users/user.entity';
 import { Job, JobRun } from './job.entities';
 import { build, Store } from '../db/store';
+import { ActivityRows } from '../activity/activity.repository';
 
 const likePattern = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 
 /** The only place job and run rows are read and written. Bind it to a transaction's manager to write atomically. */
 export class JobsRepository {
-  constructor(private readonly m: EntityManager) {}
+  /** Who changed what, written in the same transaction as the change. */
+  readonly activity: ActivityRows;
+
+  constructor(private readonly m: EntityManager) {
+    this.activity = new ActivityRows(m);
+  }
 
   listJobs(query: JobListQuery) {
     const qb = this.m.createQueryBuilder(Job, 'j');

@@ -10,7 +10,7 @@ import {
 } from '../../shared/schemas/jobs';
 import { currentUser, requireRole, requireSignedIn } from '../auth/session';
 import { AppError } from '../http/app-error';
-import { fieldsFromZod, parseBody } from '../http/validate';
+import { fieldsFromZod, parseBody, parsePatch } from '../http/validate';
 import type { z } from 'zod';
 import type { JobsService } from './jobs.service';
 
@@ -39,15 +39,23 @@ export function jobsRouter(service: JobsService): Router {
   });
 
   router.patch('/jobs/:id', editors, async (req, res) => {
-    res.json({ job: await service.patchJob(id(req.params), parseBody(jobPatchSchema, req.body)) });
+    res.json({ job: await service.patchJob(id(req.params), parsePatch(jobPatchSchema, req.body), currentUser(req)) });
   });
 
   router.post('/jobs/:id/runs', editors, async (req, res) => {
-    res.status(201).json({ run: await service.createRun(id(req.params), parseBody(runCreateSchema, req.body)) });
+    res.status(201).json({ run: await service.createRun(id(req.params), parseBody(runCreateSchema, req.body), currentUser(req)) });
   });
 
   router.put('/jobs/:id/runs/order', editors, async (req, res) => {
-    res.json({ job: await service.reorderRuns(id(req.params), parseBody(runOrderSchema, req.body)) });
+    res.json({ job: await service.reorderRuns(id(req.params), parseBody(runOrderSchema, req.body), currentUser(req)) });
+  });
+
+  router.get('/jobs/:id/activity', requireSignedIn, async (req, res) => {
+    res.json({ items: await service.jobActivity(id(req.params)) });
+  });
+
+  router.get('/runs/:id/activity', requireSignedIn, async (req, res) => {
+    res.json({ items: await service.runActivity(id(req.params)) });
   });
 
   router.get('/runs/:id', requireSignedIn, async (req, res) => {
@@ -55,16 +63,16 @@ export function jobsRouter(service: JobsService): Router {
   });
 
   router.patch('/runs/:id', editors, async (req, res) => {
-    res.json({ run: await service.patchRun(id(req.params), parseBody(runPatchSchema, req.body)) });
+    res.json({ run: await service.patchRun(id(req.params), parsePatch(runPatchSchema, req.body), currentUser(req)) });
   });
 
   router.delete('/runs/:id', editors, async (req, res) => {
-    await service.deleteRun(id(req.params));
+    await service.deleteRun(id(req.params), currentUser(req));
     res.status(204).end();
   });
 
   router.post('/runs/:id/duplicate', editors, async (req, res) => {
-    res.status(201).json({ run: await service.duplicateRun(id(req.params)) });
+    res.status(201).json({ run: await service.duplicateRun(id(req.params), currentUser(req)) });
   });
 
   router.get('/runs/:id/compare', requireSignedIn, async (req, res) => {

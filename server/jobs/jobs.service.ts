@@ -17,6 +17,9 @@ import {
   type RunPatchInput,
   type RunView,
 } from '../../shared/schemas/jobs';
+import type { ActivityView } from '../../shared/schemas/activity';
+import type { ActivityActor } from '../activity/activity.repository';
+import { activityView, changesBetween } from '../activity/activity.views';
 import { AppError } from '../http/app-error';
 import { fieldsFromZod } from '../http/validate';
 import { Job, JobRun } from './job.entities';
@@ -141,18 +144,39 @@ export class JobsService {
   async createJob(input: JobCreateInput, actor: PublicUser | null): Promise<JobDetail> {
     const now = new Date();
     const id = randomUUID();
-    await this.store.write((repo) =>
-      repo.saveJob(repo.create(Job, { id, ...input, status: 'active', createdBy: actor?.id ?? null, createdAt: now, updatedAt: now })),
-    );
+    await this.store.write(async (repo) => {
+      await repo.saveJob(repo.create(Job, { id, ...input, status: 'active', createdBy: actor?.id ?? null, createdAt: now, updatedAt: now }));
+      await repo.activity.add({ subject: 'job', subjectId: id, subjectName: input.name, jobId: id, action: 'created' }, actor);
+    });
     return this.detail(id);
   }
 
-  async patchJob(id: string, patch: JobPatchInput): Promise<JobDetail> {
+  async patchJob(id: string, patch: JobPatchInput, actor: ActivityActor | null = null): Promise<JobDetail> {
     await this.store.write(async (repo) => {
       const job = await this.jobIn(repo, id);
+      const changes = changesBetween(job, patch);
       await repo.saveJob(Object.assign(job, patch, { updatedAt: new Date() }));
+      if (changes.length === 0) return;
+      const onlyStatus = changes.length === 1 && changes[0].path === 'status';
+      const action = onlyStatus ? (patch.status === 'archived' ? 'archived' : 'unarchived') : 'edited';
+      await repo.activity.add({ subject: 'job', subjectId: id, subjectName: job.name, jobId: id, action, changes }, actor);
     });
     return this.detail(id);
+  }
+
+  // ---- activity ----
+
+  /** The job's own changes and those of its runs (deleted runs included), newest first. */
+  async jobActivity(id: string): Promise<ActivityView[]> {
+    const repo = this.store.read();
+    await this.jobIn(repo, id);
+    return (await repo.activity.list({ jobId: id })).map(activityView);
+  }
+
+  async runActivity(id: string): Promise<ActivityView[]> {
+    const repo = this.store.read();
+    await this.runIn(repo, id);
+    return (await repo.activity.list({ subject: 'run', subjectId: id })).map(activityView);
   }
 
   // ---- writing runs ----
@@ -195,7 +219,7 @@ export class JobsService {
     return applyFields(run, fields, now);
   }
 
-  async createRun(jobId: string, input: RunCreateInput): Promise<RunView> {
+  async createRun(jobId: string, input: RunCreateInput, actor: ActivityActor | null = null): Promise<RunView> {
     const session = this.results.session();
     const { position, ...fields } = input;
     await this.checkAlloys(session, fields);
@@ -208,12 +232,13 @@ export class JobsService {
       const created = this.newRun(jobId, fields, 0);
       runs.splice((position ?? runs.length + 1) - 1, 0, created);
       await repo.saveRuns(renumber(runs));
+      await repo.activity.add({ subject: 'run', subjectId: created.id, subjectName: created.name, jobId, action: 'created' }, actor);
       return created;
     });
     return this.answer(session, run);
   }
 
-  async patchRun(id: string, patch: RunPatchInput): Promise<RunView> {
+  async patchRun(id: string, patch: RunPatchInput, actor: ActivityActor | null = null): Promise<RunView> {
     const session = this.results.session();
     await this.checkAlloys(session, patch);
     const run = await this.store.write(async (repo) => {
@@ -222,24 +247,28 @@ export class JobsService {
       // Validated again whole: a change to one field can break a check that spans fields.
       const merged = runFieldsSchema.safeParse({ ...runFieldsOf(run), ...patch });
       if (!merged.success) throw AppError.badRequest('invalid_input', 'Some values need attention.', fieldsFromZod(merged.error));
+      const before = runFieldsOf(run);
       applyFields(run, merged.data, new Date());
       await repo.saveRuns([run]);
+      const changes = changesBetween(before, runFieldsOf(run));
+      if (changes.length > 0) await repo.activity.add({ subject: 'run', subjectId: id, subjectName: run.name, jobId: run.jobId, action: 'edited', changes }, actor);
       return run;
     });
     return this.answer(session, run);
   }
 
-  async deleteRun(id: string): Promise<void> {
+  async deleteRun(id: string, actor: ActivityActor | null = null): Promise<void> {
     await this.store.write(async (repo) => {
       const run = await this.runIn(repo, id);
       await this.openJob(repo, run.jobId);
       await repo.deleteRun(run.id);
+      await repo.activity.add({ subject: 'run', subjectId: id, subjectName: run.name, jobId: run.jobId, action: 'deleted', changes: [{ path: 'run', before: runFieldsOf(run), after: null }] }, actor);
       await repo.saveRuns(renumber((await repo.runsOf(run.jobId)).filter((r) => r.id !== run.id)));
     });
   }
 
   /** A copy of the run placed right after it. */
-  async duplicateRun(id: string): Promise<RunView> {
+  async duplicateRun(id: string, actor: ActivityActor | null = null): Promise<RunView> {
     const copy = await this.store.write(async (repo) => {
       const original = await this.runIn(repo, id);
       await this.openJob(repo, original.jobId);
@@ -248,14 +277,15 @@ export class JobsService {
       const created = this.newRun(original.jobId, { ...fields, name: `${fields.name} (copy)`.slice(0, 120) }, 0);
       runs.splice(runs.findIndex((r) => r.id === original.id) + 1, 0, created);
       await repo.saveRuns(renumber(runs));
+      await repo.activity.add({ subject: 'run', subjectId: created.id, subjectName: created.name, jobId: created.jobId, action: 'duplicated', changes: [{ path: 'from', before: null, after: original.name }] }, actor);
       return created;
     });
     return this.answer(this.results.session(), copy);
   }
 
-  async reorderRuns(jobId: string, input: RunOrderInput): Promise<JobDetail> {
+  async reorderRuns(jobId: string, input: RunOrderInput, actor: ActivityActor | null = null): Promise<JobDetail> {
     await this.store.write(async (repo) => {
-      await this.openJob(repo, jobId);
+      const job = await this.openJob(repo, jobId);
       const runs = await repo.runsOf(jobId);
       const byId = new Map(runs.map((r) => [r.id, r]));
       const unique = new Set(input.runIds);
@@ -264,7 +294,12 @@ export class JobsService {
           runIds: `Name each of this job's ${runs.length} runs exactly once`,
         });
       }
+      const before = runs.map((r) => r.name);
       await repo.saveRuns(renumber(input.runIds.map((rid) => byId.get(rid)!)));
+      const after = input.runIds.map((rid) => byId.get(rid)!.name);
+      if (JSON.stringify(before) !== JSON.stringify(after)) {
+        await repo.activity.add({ subject: 'job', subjectId: jobId, subjectName: job.name, jobId, action: 'reordered', changes: [{ path: 'runs', before, after }] }, actor);
+      }
     });
     return this.detail(jobId);
   }

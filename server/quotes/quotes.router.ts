@@ -1,7 +1,7 @@
 import { Router, type Request } from 'express';
 import { acceptQuoteSchema, declineQuoteSchema, quoteInputSchema, quotePatchSchema } from '../../shared/schemas/quotes';
 import { requireRole, requireSignedIn } from '../auth/session';
-import { parseBody } from '../http/validate';
+import { parseBody, parsePatch } from '../http/validate';
 import type { QuotesService } from './quotes.service';
 
 /** The address links in e-mails point at: the configured public URL, else the one the request came to. */
@@ -23,7 +23,10 @@ export function quotesRouter(service: QuotesService, publicUrl?: string): Router
     res.json({ quote: await service.get(req.params.id as string) });
   });
   router.patch('/:id', sellers, async (req, res) => {
-    res.json({ quote: await service.update(req.params.id as string, parseBody(quotePatchSchema, req.body)) });
+    res.json({ quote: await service.update(req.params.id as string, parsePatch(quotePatchSchema, req.body), req.user!) });
+  });
+  router.get('/:id/activity', requireSignedIn, async (req, res) => {
+    res.json({ items: await service.activity(req.params.id as string) });
   });
   router.get('/:id/email-preview', sellers, async (req, res) => {
     res.json({ email: await service.emailPreview(req.params.id as string, originOf(req, publicUrl)) });

@@ -7,6 +7,8 @@ import type { PublicUser } from '../../shared/schemas/auth';
 import type { PublicQuoteView, QuoteInput, QuotePricing, QuoteStatus, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
 import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
 import type { CurrencyRatesService } from '../currency/currency-rates.service';
+import type { ActivityView } from '../../shared/schemas/activity';
+import { activityView, changesBetween } from '../activity/activity.views';
 import { AppError } from '../http/app-error';
 import type { JobsStore } from '../jobs/jobs.repository';
 import type { Mailer } from '../mail/mailer';
@@ -179,6 +181,12 @@ export class QuotesService {
     return this.view(repo, await this.expireIfDue(repo, quote));
   }
 
+  async activity(id: string): Promise<ActivityView[]> {
+    const repo = this.store.read();
+    if (!(await repo.find(id))) throw AppError.notFound('There is no such quote.');
+    return (await repo.activity.list({ subject: 'quote', subjectId: id })).map(activityView);
+  }
+
   // ---- sales ----
 
   async create(input: QuoteInput, actor: Actor): Promise<QuoteView> {
@@ -203,15 +211,18 @@ export class QuotesService {
       await this.priceNow(quote);
       await repo.save(quote);
       await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status: 'draft', note: 'Created', by: actor.name, at: now });
+      await repo.activity.add({ subject: 'quote', subjectId: quote.id, subjectName: number, jobId: null, action: 'created' }, actor);
       return this.view(repo, quote);
     });
   }
 
-  async update(id: string, patch: Partial<QuoteInput>): Promise<QuoteView> {
+  async update(id: string, patch: Partial<QuoteInput>, actor: Actor | null = null): Promise<QuoteView> {
     return this.store.write(async (repo) => {
       const quote = await repo.find(id);
       if (!quote) throw AppError.notFound('There is no such quote.');
       if (quote.status !== 'draft') throw AppError.conflict('not_draft', 'A sent quote cannot be changed; make a new one.');
+      const changes = changesBetween(quote, patch);
+      if (changes.length > 0) await repo.activity.add({ subject: 'quote', subjectId: id, subjectName: quote.number, jobId: null, action: 'edited', changes }, actor);
       Object.assign(quote, patch, { updatedAt: new Date() });
       if (patch.jobId) await this.jobRuns(patch.jobId);
       await this.priceNow(quote);
@@ -235,22 +246,40 @@ export class QuotesService {
     return this.mailFor(quote, jobName, pricing, `${origin}/q/…`);
   }
 
-  /** Freezes the prices, makes the customer's private link and e-mails it. */
+  /**
+   * Freezes the prices, makes the customer's private link and e-mails it. The draft → sent step is
+   * one conditional UPDATE: of calls racing each other one wins, the others answer 409 and mail nothing.
+   * When the e-mail cannot go out the quote goes back to draft, so no link exists that nobody received.
+   */
   async send(id: string, actor: Actor, origin: string): Promise<QuoteView> {
-    const quote = await this.store.read().find(id);
-    if (!quote) throw AppError.notFound('There is no such quote.');
-    if (quote.status !== 'draft') throw AppError.conflict('not_draft', 'This quote has already been sent.');
-    if (quote.validUntil < today()) throw AppError.badRequest('invalid_input', 'The quote’s date has passed.', { validUntil: 'Choose a date from today on' });
-    const pricing: QuotePricing = { ...(await this.priceNow(quote)), frozen: true };
-    const { jobName } = await this.jobRuns(quote.jobId);
     const token = randomBytes(32).toString('base64url');
-    await this.mailer.send(this.mailFor(quote, jobName, pricing, `${origin}/q/${token}`));
-    return this.store.write(async (repo) => {
-      Object.assign(quote, { status: 'sent', snapshot: pricing, tokenHash: hashToken(token), sentAt: new Date(), updatedAt: new Date() });
-      await repo.save(quote);
-      await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status: 'sent', note: `E-mailed to ${quote.customerEmail}`, by: actor.name, at: new Date() });
-      return this.view(repo, quote);
+    const tokenHash = hashToken(token);
+    const mail = await this.store.write(async (repo) => {
+      const quote = await repo.find(id);
+      if (!quote) throw AppError.notFound('There is no such quote.');
+      if (quote.status !== 'draft') throw AppError.conflict('not_draft', 'This quote has already been sent.');
+      if (quote.validUntil < today()) throw AppError.badRequest('invalid_input', 'The quote’s date has passed.', { validUntil: 'Choose a date from today on' });
+      const pricing: QuotePricing = { ...(await this.priceNow(quote)), frozen: true };
+      const { jobName } = await this.jobRuns(quote.jobId);
+      if (!(await repo.markSent(id, { snapshot: pricing, tokenHash, sentAt: new Date() }))) {
+        throw AppError.conflict('not_draft', 'This quote has already been sent.');
+      }
+      await repo.addEvent({ id: randomUUID(), quoteId: id, status: 'sent', note: `E-mailed to ${quote.customerEmail}`, by: actor.name, at: new Date() });
+      await repo.activity.add({ subject: 'quote', subjectId: id, subjectName: quote.number, jobId: null, action: 'sent', changes: [{ path: 'customerEmail', before: null, after: quote.customerEmail }] }, actor);
+      return this.mailFor(quote, jobName, pricing, `${origin}/q/${token}`);
     });
+    try {
+      await this.mailer.send(mail);
+    } catch (err) {
+      console.error(`[dilato] quote ${id}: the e-mail could not be sent:`, err);
+      await this.store.write(async (repo) => {
+        if (await repo.undoSent(id, tokenHash)) {
+          await repo.addEvent({ id: randomUUID(), quoteId: id, status: 'draft', note: 'The e-mail could not be sent; back to draft', by: actor.name, at: new Date() });
+        }
+      });
+      throw new AppError(502, 'mail_failed', 'The e-mail could not be sent, so the quote stays a draft. Check the mail server and send it again.');
+    }
+    return this.get(id);
   }
 
   // ---- the customer, through the private link ----

@@ -24,6 +24,11 @@ export class UsersRepository {
     return this.repo.countBy({ role: 'admin', active: true });
   }
 
+  async insert(user: User) {
+    await this.repo.insert(user);
+    return (await this.findById(user.id))!;
+  }
+
   save(user: User) {
     return this.repo.save(user);
   }

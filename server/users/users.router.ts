@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { createUserSchema, updateUserSchema } from '../../shared/schemas/users';
 import { requireRole } from '../auth/session';
-import { parseBody } from '../http/validate';
+import { parseBody, parsePatch } from '../http/validate';
 import type { UsersService } from './users.service';
 
 export function usersRouter(service: UsersService): Router {
@@ -18,7 +18,7 @@ export function usersRouter(service: UsersService): Router {
   });
 
   router.patch('/:id', async (req, res) => {
-    const user = await service.update(req.params.id as string, parseBody(updateUserSchema, req.body));
+    const user = await service.update(req.params.id as string, parsePatch(updateUserSchema, req.body));
     res.json({ user });
   });
 

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { CreateUserInput, ManagedUser, UpdateUserInput } from '../../shared/schemas/users';
 import type { PublicUser } from '../../shared/schemas/auth';
+import { isUniqueViolation } from '../db/errors';
 import { AppError } from '../http/app-error';
 import { hashPassword } from '../auth/passwords';
 import type { Auth } from '../auth/lucia';
@@ -26,11 +27,9 @@ export class UsersService {
   }
 
   async create(input: CreateUserInput): Promise<ManagedUser> {
-    if (await this.users.findByEmail(input.email)) {
-      throw AppError.conflict('email_taken', 'A user with this e-mail already exists.', {
-        email: 'A user with this e-mail already exists',
-      });
-    }
+    const taken = () =>
+      AppError.conflict('email_taken', 'A user with this e-mail already exists.', { email: 'A user with this e-mail already exists' });
+    if (await this.users.findByEmail(input.email)) throw taken();
     const user = this.users.create({
       id: randomUUID(),
       email: input.email,
@@ -39,7 +38,13 @@ export class UsersService {
       passwordHash: await hashPassword(input.password),
       active: true,
     });
-    return toManagedUser(await this.users.save(user));
+    // Hashing yields to other requests, so a second create of the same e-mail can get here too: the UNIQUE index decides.
+    try {
+      return toManagedUser(await this.users.insert(user));
+    } catch (err) {
+      if (isUniqueViolation(err)) throw taken();
+      throw err;
+    }
   }
 
   async update(id: string, input: UpdateUserInput): Promise<ManagedUser> {

@@ -34,3 +34,34 @@ export const CSV_PROPERTIES = {
   yield_mpa: 'yield',
 } as const;
 export type CsvProperty = keyof typeof CSV_PROPERTIES;
+
+/** What an import did, alloy by alloy; refused rows are named by their line in the file (the header is line 1). */
+export interface ImportReport {
+  created: string[];
+  updated: string[];
+  unchanged: string[];
+  refused: { line: number; uns: string; message: string }[];
+}
+
+export const IMPORT_PHASES = ['reading', 'checking', 'writing', 'done', 'failed'] as const;
+export type ImportPhase = (typeof IMPORT_PHASES)[number];
+
+/** An import runs in the background; the client polls it until `phase` is done or failed. */
+export interface ImportJobView {
+  id: string;
+  phase: ImportPhase;
+  /** Work done and to do in the current phase (bytes while reading, alloys while checking and writing). */
+  done: number;
+  total: number;
+  /** 0 to 1 over the whole import. */
+  fraction: number;
+  startedAt: string;
+  finishedAt: string | null;
+  startedBy: string | null;
+  report: ImportReport | null;
+  /** Why a failed import stopped (alloys written before that stay written). */
+  error: string | null;
+}
+
+/** The largest CSV file an import takes. */
+export const MAX_IMPORT_BYTES = 8 * 1024 * 1024;

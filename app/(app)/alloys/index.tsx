@@ -15,7 +15,7 @@ import { Screen } from '../../../components/ui/screen';
 import { Text } from '../../../components/ui/text';
 import { layout, spacing } from '../../../constants/theme';
 import { messageOf } from '../../../hooks/api-client';
-import { CATALOGUE_CSV_URL, useAlloysQuery, useImportCsvMutation } from '../../../hooks/use-alloys';
+import { CATALOGUE_CSV_URL, useAlloysQuery, useCsvImport } from '../../../hooks/use-alloys';
 import { useSessionQuery } from '../../../hooks/use-session';
 
 export default function AlloyListScreen() {
@@ -27,7 +27,7 @@ export default function AlloyListScreen() {
   const [selected, setSelected] = useState<string[]>([]);
   const { params, atC, atError, minServiceError } = toListParams(filters, units);
   const alloys = useAlloysQuery(params);
-  const importCsv = useImportCsvMutation();
+  const csvImport = useCsvImport();
   const wide = useWindowDimensions().width >= layout.wideBreakpoint;
 
   const toggle = (id: string, on: boolean) =>
@@ -101,7 +101,7 @@ export default function AlloyListScreen() {
         </View>
       )}
 
-      {canEdit ? <CsvTools exportHref={CATALOGUE_CSV_URL} onImport={(text) => importCsv.mutateAsync(text)} /> : null}
+      {canEdit ? <CsvTools exportHref={CATALOGUE_CSV_URL} importer={csvImport} /> : null}
     </Screen>
   );
 }

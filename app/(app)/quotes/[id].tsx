@@ -6,13 +6,14 @@ import { HistoryCard, QuoteDetail } from '../../../components/quotes/quote-detai
 import { QuoteBuilder } from '../../../components/quotes/quote-builder';
 import { QuoteHeader } from '../../../components/quotes/quote-header';
 import { SendPanel } from '../../../components/quotes/send-panel';
+import { ActivitySection } from '../../../components/ui/activity-list';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorBanner } from '../../../components/ui/error-banner';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { Screen } from '../../../components/ui/screen';
 import { layout, spacing } from '../../../constants/theme';
 import { isApiError, messageOf } from '../../../hooks/api-client';
-import { useQuoteQuery, useSendQuoteMutation, useUpdateQuoteMutation } from '../../../hooks/use-quotes';
+import { useQuoteActivityQuery, useQuoteQuery, useSendQuoteMutation, useUpdateQuoteMutation } from '../../../hooks/use-quotes';
 import { useSessionQuery } from '../../../hooks/use-session';
 import type { QuoteView } from '../../../shared/schemas/quotes';
 
@@ -20,6 +21,7 @@ export default function QuoteScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
   const { data: me } = useSessionQuery();
   const quote = useQuoteQuery(id);
+  const activity = useQuoteActivityQuery(id);
 
   if (quote.isPending || !me) return <LoadingState label="Loading the quote…" />;
   if (quote.isError) {
@@ -38,6 +40,7 @@ export default function QuoteScreen() {
     <Screen wide>
       <QuoteHeader quote={quote.data} />
       {quote.data.status === 'draft' && canSell ? <DraftEditor quote={quote.data} /> : <QuoteDetail quote={quote.data} />}
+      <ActivitySection intro="Who created, changed and sent this quote." query={activity} />
     </Screen>
   );
 }

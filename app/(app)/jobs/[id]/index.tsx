@@ -6,6 +6,7 @@ import { LoadFailed } from '../../../../components/jobs/load-failed';
 import { JobTotalsCard } from '../../../../components/jobs/job-totals';
 import { canEditJobs } from '../../../../components/jobs/roles';
 import { RunCard } from '../../../../components/jobs/run-card';
+import { ActivitySection } from '../../../../components/ui/activity-list';
 import { Button } from '../../../../components/ui/button';
 import { EmptyState } from '../../../../components/ui/empty-state';
 import { ErrorBanner } from '../../../../components/ui/error-banner';
@@ -15,7 +16,7 @@ import { Text } from '../../../../components/ui/text';
 import { UnitSwitch } from '../../../../components/units/unit-switch';
 import { spacing } from '../../../../constants/theme';
 import { messageOf } from '../../../../hooks/api-client';
-import { useJobQuery, useReorderRunsMutation, useUpdateJobMutation } from '../../../../hooks/use-jobs';
+import { useJobActivityQuery, useJobQuery, useReorderRunsMutation, useUpdateJobMutation } from '../../../../hooks/use-jobs';
 import { useDeleteRunMutation, useDuplicateRunMutation } from '../../../../hooks/use-runs';
 import { useSessionQuery } from '../../../../hooks/use-session';
 import { useUnits } from '../../../../hooks/use-units';
@@ -26,6 +27,7 @@ export default function JobScreen() {
   const { data: me } = useSessionQuery();
   const units = useUnits();
   const job = useJobQuery(id);
+  const activity = useJobActivityQuery(id);
   const update = useUpdateJobMutation(id ?? '');
   const reorder = useReorderRunsMutation(id ?? '');
   const duplicate = useDuplicateRunMutation();
@@ -103,6 +105,7 @@ export default function JobScreen() {
           </View>
         )}
       </View>
+      <ActivitySection intro="Who changed what on this job and its runs, deleted runs included." query={activity} />
       <UnitSwitch />
     </Screen>
   );

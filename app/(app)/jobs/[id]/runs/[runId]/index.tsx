@@ -6,6 +6,7 @@ import { canEditJobs } from '../../../../../../components/jobs/roles';
 import { alloyName } from '../../../../../../components/jobs/run-card';
 import { fieldsOf } from '../../../../../../components/runs/new-run';
 import { RunEditor } from '../../../../../../components/runs/run-editor';
+import { ActivitySection } from '../../../../../../components/ui/activity-list';
 import { ErrorBanner } from '../../../../../../components/ui/error-banner';
 import { LoadingState } from '../../../../../../components/ui/loading-state';
 import { Screen } from '../../../../../../components/ui/screen';
@@ -13,7 +14,7 @@ import { Text } from '../../../../../../components/ui/text';
 import { UnitSwitch } from '../../../../../../components/units/unit-switch';
 import { spacing } from '../../../../../../constants/theme';
 import { useJobQuery } from '../../../../../../hooks/use-jobs';
-import { useRunQuery, useUpdateRunMutation } from '../../../../../../hooks/use-runs';
+import { useRunActivityQuery, useRunQuery, useUpdateRunMutation } from '../../../../../../hooks/use-runs';
 import { useSessionQuery } from '../../../../../../hooks/use-session';
 import { useUnits } from '../../../../../../hooks/use-units';
 
@@ -24,6 +25,7 @@ export default function RunScreen() {
   const run = useRunQuery(runId);
   const job = useJobQuery(id);
   const update = useUpdateRunMutation(runId ?? '');
+  const activity = useRunActivityQuery(runId);
 
   if (run.isPending) return <LoadingState label="Loading the run…" />;
   if (run.isError) {
@@ -64,6 +66,7 @@ export default function RunScreen() {
         saveLabel="Save changes"
         onSave={(values) => update.mutateAsync(values)}
       />
+      <ActivitySection intro="Who created and changed this run." query={activity} />
     </Screen>
   );
 }

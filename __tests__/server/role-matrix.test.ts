@@ -1,0 +1,134 @@
+import request from 'supertest';
+import { ROLES, type Role } from '../../shared/schemas/auth';
+import { client, createTestApp, expectErrorShape, HOST, ORIGIN, signedIn, type TestApp } from './test-app';
+import { routeFixtures, routeList, routeUrl, type RouteFixtures } from './route-list';
+
+type Who = 'anyone' | 'signed-in' | 'token' | Role[];
+const EDITORS: Role[] = ['engineer', 'admin'];
+const SHOP_FLOOR: Role[] = ['fabricator', 'engineer', 'admin'];
+const SELLERS: Role[] = ['sales', 'admin'];
+const ADMIN: Role[] = ['admin'];
+
+/** Who may use each route. A route the app has without a row here fails the first test. */
+const MATRIX: Record<string, Who> = {
+  'GET /api/health': 'anyone',
+  'GET /api/auth/me': 'anyone',
+  'POST /api/auth/sign-in': 'anyone',
+  'POST /api/auth/sign-out': 'anyone',
+  'GET /api/public/quotes/:token': 'token',
+  'POST /api/public/quotes/:token/accept': 'token',
+  'POST /api/public/quotes/:token/decline': 'token',
+
+  'GET /api/alloys': 'signed-in',
+  'GET /api/alloys/:id': 'signed-in',
+  'GET /api/alloys/:id/revisions': 'signed-in',
+  'GET /api/alloys/:id/versions/:version': 'signed-in',
+  'GET /api/alloys/export.csv': 'signed-in',
+  'GET /api/alloys/:id/review': EDITORS,
+  'GET /api/alloys/imports/:id': EDITORS,
+  'POST /api/alloys': EDITORS,
+  'POST /api/alloys/import': EDITORS,
+  'PATCH /api/alloys/:id': EDITORS,
+  'POST /api/alloys/:id/datasheets': EDITORS,
+  'POST /api/alloys/:id/publish': ADMIN,
+  'POST /api/alloys/:id/retire': ADMIN,
+  'POST /api/alloys/:id/restore': ADMIN,
+  'GET /api/datasheets/:id': 'signed-in',
+  'GET /api/sources': 'signed-in',
+  'POST /api/sources': EDITORS,
+  'GET /api/flex-parts': 'signed-in',
+  'POST /api/flex-parts': ADMIN,
+  'PATCH /api/flex-parts/:id': ADMIN,
+  'POST /api/calc/run': 'signed-in',
+
+  'GET /api/jobs': 'signed-in',
+  'GET /api/jobs/:id': 'signed-in',
+  'GET /api/jobs/:id/activity': 'signed-in',
+  'POST /api/jobs': SHOP_FLOOR,
+  'PATCH /api/jobs/:id': SHOP_FLOOR,
+  'POST /api/jobs/:id/runs': SHOP_FLOOR,
+  'PUT /api/jobs/:id/runs/order': SHOP_FLOOR,
+  'GET /api/runs/:id': 'signed-in',
+  'GET /api/runs/:id/activity': 'signed-in',
+  'GET /api/runs/:id/compare': 'signed-in',
+  'PATCH /api/runs/:id': SHOP_FLOOR,
+  'DELETE /api/runs/:id': SHOP_FLOOR,
+  'POST /api/runs/:id/duplicate': SHOP_FLOOR,
+
+  'GET /api/me/preferences': 'signed-in',
+  'PUT /api/me/preferences': 'signed-in',
+  'GET /api/currency-rates': 'signed-in',
+  'PUT /api/currency-rates/:from': ADMIN,
+  'DELETE /api/currency-rates/:from': ADMIN,
+  'GET /api/settings': 'signed-in',
+  'PUT /api/settings': ADMIN,
+  'GET /api/outbox': SELLERS,
+  'GET /api/outbox/:id': SELLERS,
+  'GET /api/quotes': 'signed-in',
+  'GET /api/quotes/:id': 'signed-in',
+  'GET /api/quotes/:id/activity': 'signed-in',
+  'POST /api/quotes': SELLERS,
+  'PATCH /api/quotes/:id': SELLERS,
+  'GET /api/quotes/:id/email-preview': SELLERS,
+  'POST /api/quotes/:id/send': SELLERS,
+  'GET /api/users': ADMIN,
+  'POST /api/users': ADMIN,
+  'PATCH /api/users/:id': ADMIN,
+};
+
+type Column = Role | 'anonymous' | 'customer';
+const COLUMNS: Column[] = ['anonymous', ...ROLES, 'customer'];
+
+function allowed(who: Who, column: Column): boolean {
+  if (who === 'anyone') return true;
+  // The customer link works for whoever holds the token; the anonymous column holds a made-up one.
+  if (who === 'token') return column !== 'anonymous';
+  if (column === 'anonymous' || column === 'customer') return false;
+  return who === 'signed-in' || who.includes(column);
+}
+
+let t: TestApp;
+let fx: RouteFixtures;
+
+beforeAll(async () => {
+  t = await createTestApp();
+  fx = await routeFixtures(t);
+}, 60_000);
+afterAll(() => t.close());
+
+const url = (route: string, column: Column) => routeUrl(route, fx, column === 'anonymous');
+
+describe('the role matrix', () => {
+  it('when the app has a route, then the matrix has its row, and the other way round', () => {
+    expect(routeList(t.app)).toEqual(Object.keys(MATRIX).sort());
+  });
+
+  const cells = Object.entries(MATRIX).flatMap(([route, who]) => COLUMNS.map((column) => ({ route, who, column })));
+  it.each(cells)('$route as $column', async ({ route, who, column }) => {
+    const [method] = route.split(' ');
+    const c = column === 'anonymous' || column === 'customer' ? client(t.app) : await signedIn(t.app, column);
+    const m = method.toLowerCase() as 'get' | 'post' | 'patch' | 'put' | 'delete';
+    const res = method === 'GET' ? await c.get(url(route, column)) : await c[m](url(route, column)).send({});
+    expect(res.status).toBeLessThan(500);
+    if (who === 'token' && column === 'anonymous') {
+      expect([400, 404]).toContain(res.status);
+    } else if (allowed(who, column)) {
+      expect([401, 403]).not.toContain(res.status);
+    } else if (column === 'anonymous' || column === 'customer') {
+      expect(res.status).toBe(401);
+      expectErrorShape(res.body, 'signed_out');
+    } else {
+      expect(res.status).toBe(403);
+      expectErrorShape(res.body, 'forbidden');
+    }
+  });
+
+  it('when a request comes with no Origin, then no state-changing route accepts it', async () => {
+    for (const route of Object.keys(MATRIX).filter((r) => !r.startsWith('GET '))) {
+      const [method] = route.split(' ');
+      const res = await request(t.app)[method.toLowerCase() as 'post'](url(route, 'customer')).set('Host', HOST).send({});
+      expect([route, res.status]).toEqual([route, 403]);
+    }
+    expect(ORIGIN).toMatch(/^http:/);
+  });
+});
