@@ -1,6 +1,7 @@
 import { prepareStrainCurve } from '../../shared/engine/expansion';
 import { CLEAR_STRESS_NOTE, CLEAR_STRESS_RATIO, prepareStrengthTables, restraint } from '../../shared/engine/restraint';
 import type { AlloyData, Segment } from '../../shared/engine/types';
+import { stressFigure } from '../../shared/jobs/stress-figure';
 import { alloyWith, constantAlphaAlloy, enCarbonElongation, meanCteTable, range, stainless304 } from './published';
 
 const uniform = (t: number): Segment[] => [{ lengthMm: 1000, startTempC: t, endTempC: t }];
@@ -68,6 +69,7 @@ describe('temperature-dependent data', () => {
     });
     const r = run(alloy, [{ lengthMm: 1000, startTempC: 600, endTempC: 20 }], 20);
     expect(r.governing?.tempC).toBe(600);
+    expect(stressFigure(r)).toMatchObject({ tempC: 600, ratio: r.governing?.ratio, yieldDataEndC: null });
     expect(r.peakTempC).toBeLessThan(600);
     expect(r.governing?.stressMPa as number).toBeLessThan(r.peakStressMPa as number);
     expect(r.jointNeeded).toBe(true);
@@ -85,6 +87,11 @@ describe('tables that stop short of the run', () => {
   it('when the yield table stops below the whole run, then no ratio is claimed and the verdict rests on the last tabulated yield', () => {
     const r = run({ ...stainless304(), yield: stainless304().yield.filter((y) => y.tempC <= 500) }, uniform(800), 20);
     expect(r.governing).toBeNull();
+    // Against the last tabulated yield, 205 MPa × k_0.2p,500 °C = 0.54 (EN 1993-1-2 Annex C): a lower bound on the ratio.
+    expect(r.beyondYieldData).toMatchObject({ tempC: 800, yieldTempC: 500 });
+    expect(r.beyondYieldData?.yieldMPa).toBeCloseTo(205 * 0.54, 10);
+    expect(r.beyondYieldData?.ratio).toBeCloseTo((193_000 * 14.8484e-3) / (205 * 0.54), 1);
+    expect(stressFigure(r)).toMatchObject({ tempC: 800, yieldDataEndC: 500 });
     expect(r.warnings.map((w) => w.code)).toContain('YIELD_DATA_RANGE');
     expect(r.verdict).toBe('yields');
     expect(r.jointNeeded).toBe(true);

@@ -20,10 +20,14 @@ export function stressLine(f: StressFigure, units: UnitSystem): string {
   const at = f.tempC === null ? '' : ` at ${show('temperature', f.tempC, units)}`;
   const stress = `${show('stress', f.stressMPa, units)}${at}`;
   if (f.ratio === null || f.yieldMPa === null) return `${stress}; yield there is not in the data`;
+  if (f.yieldDataEndC !== null) {
+    return `${stress}, at least ${Math.round(f.ratio * 100)} % of yield: ${show('stress', f.yieldMPa, units)} at ${show('temperature', f.yieldDataEndC, units)}, where the yield data stop, and lower above`;
+  }
   return `${stress}, ${Math.round(f.ratio * 100)} % of its ${show('stress', f.yieldMPa, units)} yield`;
 }
 
-/** Short form for tables: "183 % of yield". */
+/** Short form for tables: "183 % of yield", "at least 1520 % of yield". */
 export function stressShare(f: StressFigure): string {
-  return f.ratio === null ? 'not in the data' : `${Math.round(f.ratio * 100)} % of yield`;
+  if (f.ratio === null) return 'not in the data';
+  return `${f.yieldDataEndC === null ? '' : 'at least '}${Math.round(f.ratio * 100)} % of yield`;
 }

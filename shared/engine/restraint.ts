@@ -73,6 +73,7 @@ function notInData(missing: 'modulus' | 'yield', bases: StrengthBases, rest: Par
     peakStressMPa: null,
     peakTempC: null,
     governing: null,
+    beyondYieldData: null,
     verdict: 'unknown',
     clearRatio: CLEAR_STRESS_RATIO,
     clearRatioNote: CLEAR_STRESS_NOTE,
@@ -131,13 +132,16 @@ export function restraint(c: StrainCurve, s: StrengthTables, segments: Segment[]
     });
   }
   let governing: RestraintResult['governing'] = null;
-  let beyond = 0; // highest stress / last tabulated yield above the yield table
+  let beyondData: RestraintResult['beyondYieldData'] = null;
   temps.forEach((t, i) => {
     const y = interpolateOrNull(yieldPts, t);
-    if (y === null) beyond = Math.max(beyond, stresses[i] / lastYield.v);
-    else if (!governing || stresses[i] / y > governing.ratio) governing = { stressMPa: stresses[i], tempC: t, yieldMPa: y, ratio: stresses[i] / y };
+    const ratio = stresses[i] / (y ?? lastYield.v);
+    if (y === null) {
+      if (!beyondData || ratio > beyondData.ratio) beyondData = { stressMPa: stresses[i], tempC: t, yieldMPa: lastYield.v, yieldTempC: lastYield.t, ratio };
+    } else if (!governing || ratio > governing.ratio) governing = { stressMPa: stresses[i], tempC: t, yieldMPa: y, ratio };
   });
   const worst = (governing as RestraintResult['governing'])?.ratio ?? 0;
+  const beyond = (beyondData as RestraintResult['beyondYieldData'])?.ratio ?? 0;
   const partlyBeyond = temps.some((t) => t > lastYield.t);
   const verdict: RestraintVerdict =
     worst >= 1 || beyond >= 1 ? 'yields' : worst > CLEAR_STRESS_RATIO || beyond > CLEAR_STRESS_RATIO ? 'marginal' : partlyBeyond ? 'unknown' : 'clear';
@@ -146,6 +150,7 @@ export function restraint(c: StrainCurve, s: StrengthTables, segments: Segment[]
     peakStressMPa: peak,
     peakTempC: peakT,
     governing,
+    beyondYieldData: beyondData,
     verdict,
     clearRatio: CLEAR_STRESS_RATIO,
     clearRatioNote: CLEAR_STRESS_NOTE,

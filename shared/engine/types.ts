@@ -167,6 +167,11 @@ export interface RestraintResult {
   peakTempC: number | null;
   /** Where stress/yield is highest among the temperatures the yield table covers; the one figure every screen shows. */
   governing: GoverningStress | null;
+  /**
+   * Above the yield table's top: the highest stress there against the last tabulated yield.
+   * Yield does not rise with temperature in this range, so its ratio is a lower bound.
+   */
+  beyondYieldData: (GoverningStress & { yieldTempC: number }) | null;
   verdict: RestraintVerdict;
   /** Stress/yield at or below which the run may stay rigidly held. */
   clearRatio: number;
