@@ -95,9 +95,14 @@ export function assessFlexPart(part: FlexPart, duty: FlexDuty): FlexCandidateRes
   if (part.maxTempC < duty.tempAtFlexC) {
     reasons.push(`Rated to ${fmt(part.maxTempC)} °C, below the ${fmt(duty.tempAtFlexC)} °C where it sits`);
   }
-  const hot = duty.states.find((s) => s.state === 'hot') ?? duty.states[0];
-  const lateral = Math.max(...duty.states.map((s) => s.lateralMm));
-  const rotation = Math.max(...duty.states.map((s) => s.rotationDeg));
+  let hot = duty.states[0];
+  let lateral = 0;
+  let rotation = 0;
+  for (const s of duty.states) {
+    if (s.state === 'hot') hot = s;
+    lateral = Math.max(lateral, s.lateralMm);
+    rotation = Math.max(rotation, s.rotationDeg);
+  }
   const lateralUse = shareOf(lateral, part.lateralOffsetMm);
   const angularUse = shareOf(rotation, part.ratedAngularDeg);
   if (lateralUse > share) reasons.push(`Lateral offset ${fmt(lateral)} mm is ${pct(lateralUse)} of its ${fmt(part.lateralOffsetMm)} mm rating (at most ${pct(share)})`);
@@ -133,7 +138,8 @@ export function assessFlexPart(part: FlexPart, duty: FlexDuty): FlexCandidateRes
       });
     }
   }
-  const worstUse = Math.max(lateralUse, angularUse, ...uses.flatMap((u) => [u.compressionUse, u.extensionUse]));
+  let worstUse = Math.max(lateralUse, angularUse);
+  for (const u of uses) worstUse = Math.max(worstUse, u.compressionUse, u.extensionUse);
   return {
     id: part.id,
     name: part.name,

@@ -8,7 +8,8 @@ const r = (x: number) => Math.round(x * 10) / 10;
 /** Inputs that compute but are likely mistakes, or change what the figures mean. */
 export function inputWarnings(segments: Segment[], installTempC: number, growthMm: number): EngineWarning[] {
   const warnings: EngineWarning[] = [];
-  const coldest = Math.min(...segments.flatMap((s) => [s.startTempC, s.endTempC]));
+  let coldest = Infinity;
+  for (const s of segments) coldest = Math.min(coldest, s.startTempC, s.endTempC);
   if (coldest < installTempC) {
     warnings.push({
       code: growthMm < 0 ? 'RUN_SHRINKS' : 'COLDER_THAN_INSTALL',

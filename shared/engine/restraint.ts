@@ -111,37 +111,51 @@ export function restraint(c: StrainCurve, s: StrengthTables, segments: Segment[]
       message: `The alloy's modulus data stop at ${eMax} °C, below the run's ${topT} °C: the ${eMax} °C value is used above it, which overstates the restrained stress`,
     });
   }
+  // One pass, no per-point objects: this runs on every keystroke of the run editor.
+  const e0 = strainAt(c, installTempC);
+  const yieldPts = s.yield;
+  const lastYield = yieldPts ? yieldPts[yieldPts.length - 1] : null;
   let peak = 0;
   let peakT = temps[0];
-  const stresses = temps.map((t) => {
-    const sigma = Math.abs(restrainedStressMPa(c, modulus, t, installTempC));
+  let worst = -1;
+  let worstI = -1;
+  let worstY = 0;
+  let beyond = -1;
+  let beyondI = -1;
+  const stresses = new Float64Array(temps.length);
+  for (let i = 0; i < temps.length; i++) {
+    const t = temps[i];
+    const sigma = Math.abs(modulusAt(modulus, t) * 1000 * (strainAt(c, t) - e0));
+    stresses[i] = sigma;
     if (sigma > peak) {
       peak = sigma;
       peakT = t;
     }
-    return sigma;
-  });
-  const yieldPts = s.yield;
-  if (!yieldPts) return notInData('yield', bases, { peakStressMPa: peak, peakTempC: peakT, warnings });
-
-  const lastYield = yieldPts[yieldPts.length - 1];
+    if (!yieldPts || !lastYield) continue;
+    const y = interpolateOrNull(yieldPts, t);
+    if (y === null) {
+      if (sigma / lastYield.v > beyond) {
+        beyond = sigma / lastYield.v;
+        beyondI = i;
+      }
+    } else if (sigma / y > worst) {
+      worst = sigma / y;
+      worstI = i;
+      worstY = y;
+    }
+  }
+  if (!yieldPts || !lastYield) return notInData('yield', bases, { peakStressMPa: peak, peakTempC: peakT, warnings });
   if (topT > lastYield.t) {
     warnings.push({
       code: 'YIELD_DATA_RANGE',
       message: `The alloy's yield data stop at ${lastYield.t} °C, below the run's ${topT} °C: the stress is judged against yield only up to ${lastYield.t} °C`,
     });
   }
-  let governing: RestraintResult['governing'] = null;
-  let beyondData: RestraintResult['beyondYieldData'] = null;
-  temps.forEach((t, i) => {
-    const y = interpolateOrNull(yieldPts, t);
-    const ratio = stresses[i] / (y ?? lastYield.v);
-    if (y === null) {
-      if (!beyondData || ratio > beyondData.ratio) beyondData = { stressMPa: stresses[i], tempC: t, yieldMPa: lastYield.v, yieldTempC: lastYield.t, ratio };
-    } else if (!governing || ratio > governing.ratio) governing = { stressMPa: stresses[i], tempC: t, yieldMPa: y, ratio };
-  });
-  const worst = (governing as RestraintResult['governing'])?.ratio ?? 0;
-  const beyond = (beyondData as RestraintResult['beyondYieldData'])?.ratio ?? 0;
+  const governing = worstI < 0 ? null : { stressMPa: stresses[worstI], tempC: temps[worstI], yieldMPa: worstY, ratio: worst };
+  const beyondData =
+    beyondI < 0 ? null : { stressMPa: stresses[beyondI], tempC: temps[beyondI], yieldMPa: lastYield.v, yieldTempC: lastYield.t, ratio: beyond };
+  worst = Math.max(worst, 0);
+  beyond = Math.max(beyond, 0);
   const partlyBeyond = temps.some((t) => t > lastYield.t);
   const verdict: RestraintVerdict =
     worst >= 1 || beyond >= 1 ? 'yields' : worst > CLEAR_STRESS_RATIO || beyond > CLEAR_STRESS_RATIO ? 'marginal' : partlyBeyond ? 'unknown' : 'clear';
