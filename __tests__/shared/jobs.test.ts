@@ -14,6 +14,8 @@ const fields = (over: Partial<RunFields> = {}): RunFields => ({
   startFixing: 'flange',
   endFixing: 'flange',
   joint: { type: 'none' },
+  supports: [],
+  nearby: [],
   notes: '',
   ...over,
 });

@@ -28,6 +28,9 @@ const settings: ShopSettings = {
   marginPct: 20,
   travelSharePct: 70,
   coldestStartC: -20,
+  supportNearJointMm: 150,
+  engineSupportMm: 300,
+  nearbyMinimumsMm: { fuel_line: 150, brake_line: 150, wiring: 150, rubber: 100, panel: 25, other: 50 },
   isDemo: false,
 };
 

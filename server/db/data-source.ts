@@ -11,6 +11,7 @@ import { ShopSettingsRow } from '../settings/shop-settings.entity';
 import { SignInAddress } from '../auth/sign-in-address.entity';
 import { ActivityEntry } from '../activity/activity.entity';
 import { Activity1764600610000 } from './migrations/1764600610000-activity';
+import { RunSupportsAndNearby1764600700000 } from './migrations/1764600700000-run-supports-and-nearby';
 import { SignInAddresses1764600600000 } from './migrations/1764600600000-sign-in-addresses';
 import { QuotesAndMail1764600300000 } from './migrations/1764600300000-quotes-and-mail';
 import { Jobs1764600200000 } from './migrations/1764600200000-jobs';
@@ -53,6 +54,7 @@ export const MIGRATIONS = [
   CurrencyRates1764600510000,
   SignInAddresses1764600600000,
   Activity1764600610000,
+  RunSupportsAndNearby1764600700000,
 ];
 
 /** `database` is a file path, or ':memory:' for tests. */

@@ -1,6 +1,6 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
 import type { FixedPointId } from '../../shared/jobs/fixed-points';
-import type { Joint, JobStatus } from '../../shared/schemas/jobs';
+import type { Joint, JobStatus, NearbyItem, Support } from '../../shared/schemas/jobs';
 import type { Segment } from '../../shared/engine/types';
 
 @Entity({ name: 'job' })
@@ -33,6 +33,8 @@ export class JobRun {
   @Column('varchar', { name: 'start_fixing' }) startFixing: FixedPointId;
   @Column('varchar', { name: 'end_fixing' }) endFixing: FixedPointId;
   @Column('simple-json') joint: Joint;
+  @Column('simple-json', { default: '[]' }) supports: Support[];
+  @Column('simple-json', { default: '[]' }) nearby: NearbyItem[];
   @Column('text', { default: '' }) notes: string;
   @Column('datetime', { name: 'created_at' }) createdAt: Date;
   @Column('datetime', { name: 'updated_at' }) updatedAt: Date;

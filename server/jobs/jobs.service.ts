@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { jobTotals } from '../../shared/jobs/job-totals';
 import { stressFigure } from '../../shared/jobs/stress-figure';
+import { checkSystem } from '../../shared/jobs/system-check';
 import type { PublicUser } from '../../shared/schemas/auth';
 import {
   runFieldsSchema,
@@ -78,8 +79,9 @@ export class JobsService {
 
   private async detailIn(repo: JobsRepository, job: Job): Promise<JobDetail> {
     const [runs, names] = await Promise.all([repo.runsOf(job.id), repo.userNames(job.createdBy ? [job.createdBy] : [])]);
-    const views = await this.computeAll(this.results.session(), runs);
-    return { ...jobView(job, names), runs: views, totals: jobTotals(views) };
+    const session = this.results.session();
+    const views = await this.computeAll(session, runs);
+    return { ...jobView(job, names), runs: views, totals: jobTotals(views), system: checkSystem(views, await session.systemBasis()) };
   }
 
   private async jobIn(repo: JobsRepository, id: string): Promise<Job> {
@@ -316,6 +318,8 @@ function applyFields(run: JobRun, fields: RunFields, now: Date): JobRun {
     startFixing: fields.startFixing,
     endFixing: fields.endFixing,
     joint: fields.joint,
+    supports: fields.supports,
+    nearby: fields.nearby,
     notes: fields.notes,
     updatedAt: now,
   });

@@ -12,6 +12,8 @@ export function runFieldsOf(run: JobRun): RunFields {
     startFixing: run.startFixing,
     endFixing: run.endFixing,
     joint: run.joint,
+    supports: run.supports ?? [],
+    nearby: run.nearby ?? [],
     notes: run.notes,
   };
 }

@@ -7,7 +7,8 @@ import type { CurrencyRatesService } from '../currency/currency-rates.service';
 import type { FlexPartsService } from '../flex-parts/flex-parts.service';
 import { AppError } from '../http/app-error';
 import type { ShopSettingsService } from '../settings/shop-settings.service';
-import { designBasisOf } from '../../shared/schemas/shop-settings';
+import { designBasisOf, systemBasisOf } from '../../shared/schemas/shop-settings';
+import type { SystemBasis } from '../../shared/jobs/system-basis';
 
 /** What the catalogue says about an alloy id right now. */
 export type AlloyLookup =
@@ -45,6 +46,11 @@ export class ResultSession {
   private designBasis(): Promise<DesignBasis> {
     this.design ??= this.settings.get().then(designBasisOf);
     return this.design;
+  }
+
+  /** The shop's support and clearance rules for the system check. */
+  async systemBasis(): Promise<SystemBasis> {
+    return systemBasisOf(await this.settings.get());
   }
 
   /** The material cost in the shop's currency where a rate allows; otherwise left in the alloy's own currency. */

@@ -17,7 +17,9 @@ const TUBE_76 = { odMm: 76.2, wallMm: 1.651 };
 /** 6 in × 14 ga (0.083 in) for the dryer's hot-air duct. */
 const TUBE_152 = { odMm: 152.4, wallMm: 2.108 };
 
-type DemoRun = Omit<RunCreateInput, 'alloyId' | 'installTempC' | 'joint' | 'notes'> & {
+type DemoRun = Omit<RunCreateInput, 'alloyId' | 'installTempC' | 'joint' | 'notes' | 'supports' | 'nearby'> & {
+  supports?: RunCreateInput['supports'];
+  nearby?: RunCreateInput['nearby'];
   uns: string;
   joint?: RunCreateInput['joint'];
   notes?: string;
@@ -64,6 +66,11 @@ export const DEMO_JOBS: DemoJob[] = [
         startFixing: 'turbo_outlet',
         endFixing: 'v_band',
         joint: { type: 'flex', atMm: 300, lateralOffsetMm: 1.5, heatCycles: 5000 },
+        supports: [
+          { kind: 'sliding', atMm: 180 },
+          { kind: 'hanger', atMm: 420 },
+        ],
+        nearby: [{ kind: 'wiring', label: 'Turbo speed sensor lead', atMm: 120, coldGapMm: 170, direction: 'beside' }],
         notes: 'Flex section 300 mm from the turbo outlet; 1.5 mm of engine rock across it. Support the flex on both sides, never let it carry weight.',
       },
       {
@@ -73,6 +80,14 @@ export const DEMO_JOBS: DemoJob[] = [
         segments: [{ lengthMm: 900, startTempC: 640, endTempC: 520 }],
         startFixing: 'v_band',
         endFixing: 'slip_joint',
+        supports: [
+          { kind: 'hanger', atMm: 400 },
+          { kind: 'sliding', atMm: 780 },
+        ],
+        nearby: [
+          { kind: 'fuel_line', label: 'Fuel feed to the rail', atMm: 450, coldGapMm: 170, direction: 'beside' },
+          { kind: 'brake_line', label: 'Rear brake line', atMm: 200, coldGapMm: 120, direction: 'beside' },
+        ],
         joint: { type: 'slip', inner: { tempC: 520 }, outer: { tempC: 480 }, coldClearanceMm: 0.38, coldEngagementMm: 90, coldAxialGapMm: 25, toleranceMm: 0.03 },
         notes: 'Sleeve expanded on the mandrel to the measured spigot: ±0.03 mm on the sized fit.',
       },
@@ -83,6 +98,11 @@ export const DEMO_JOBS: DemoJob[] = [
         segments: [{ lengthMm: 1100, startTempC: 420, endTempC: 260 }],
         startFixing: 'slip_joint',
         endFixing: 'free_end',
+        supports: [
+          { kind: 'sliding', atMm: 120 },
+          { kind: 'hanger', atMm: 700 },
+        ],
+        nearby: [{ kind: 'rubber', label: 'Rear bumper mount', atMm: 1100, coldGapMm: 130, direction: 'in_line' }],
       },
     ],
   },
@@ -100,6 +120,7 @@ export const DEMO_JOBS: DemoJob[] = [
         startFixing: 'turbo_outlet',
         endFixing: 'flex_section',
         joint: { type: 'flex', atMm: 320 },
+        supports: [{ kind: 'hanger', atMm: 250 }],
       },
       {
         name: 'Downpipe, flex to catalyst flange',
@@ -108,6 +129,8 @@ export const DEMO_JOBS: DemoJob[] = [
         segments: [{ lengthMm: 560, startTempC: 740, endTempC: 640 }],
         startFixing: 'flex_section',
         endFixing: 'flange',
+        supports: [{ kind: 'sliding', atMm: 100 }],
+        nearby: [{ kind: 'wiring', label: 'Oxygen sensor harness', atMm: 300, coldGapMm: 170, direction: 'beside' }],
       },
     ],
   },
@@ -124,6 +147,12 @@ export const DEMO_JOBS: DemoJob[] = [
         segments: [{ lengthMm: 3000, startTempC: 480, endTempC: 450 }],
         startFixing: 'equipment_nozzle',
         endFixing: 'slip_joint',
+        supports: [
+          { kind: 'hanger', atMm: 1000 },
+          { kind: 'hanger', atMm: 2000 },
+          { kind: 'sliding', atMm: 2880 },
+        ],
+        nearby: [{ kind: 'panel', label: 'Dryer casing', atMm: 1500, coldGapMm: 40, direction: 'beside' }],
         joint: {
           type: 'slip',
           inner: { tempC: 450 },
@@ -143,6 +172,10 @@ export const DEMO_JOBS: DemoJob[] = [
         segments: [{ lengthMm: 2400, startTempC: 450, endTempC: 420 }],
         startFixing: 'slip_joint',
         endFixing: 'equipment_nozzle',
+        supports: [
+          { kind: 'sliding', atMm: 120 },
+          { kind: 'hanger', atMm: 1200 },
+        ],
       },
     ],
   },

@@ -15,7 +15,7 @@ export function toCalcRequest(run: RunFields): CalcRunRequest & RunInput {
     const { type: _type, ...flex } = joint;
     request.flex = flex;
   } else if (joint.type === 'slip') {
-    const { type: _type, ...slip } = joint;
+    const { type: _type, atMm: _atMm, ...slip } = joint;
     request.slip = slip;
   }
   return request;

@@ -1,8 +1,11 @@
 import { z } from 'zod';
 import { FIXED_POINT_IDS } from '../jobs/fixed-points';
+import { NEARBY_KINDS } from '../jobs/nearby';
+import { BOUNDS } from './bounds';
 import { runFieldPath, toCalcRequest } from '../jobs/run-input';
 import type { LimitStatus, RunResult } from '../engine/types';
 import type { StressFigure } from '../jobs/stress-figure';
+import type { SystemCheck } from '../jobs/system-check';
 import { calcRunRequestSchema, flexOptionsSchema, segmentSchema, slipOptionsSchema, tubeSchema } from './calc';
 
 const text = (what: string, max: number) =>
@@ -62,12 +65,40 @@ export const jointSchema = z.discriminatedUnion(
   [
     z.object({ type: z.literal('none') }),
     flexOptionsSchema.omit({ parts: true }).extend({ type: z.literal('flex') }),
-    slipOptionsSchema.extend({ type: z.literal('slip'), inner: slipMember, outer: slipMember }),
+    slipOptionsSchema.extend({
+      type: z.literal('slip'),
+      inner: slipMember,
+      outer: slipMember,
+      /** Where the joint sits along the run; absent = the end held by the slip joint, else the run's end. */
+      atMm: z.number({ error: 'Enter a number' }).nonnegative({ error: 'Position cannot be negative' }).optional(),
+    }),
   ],
   { error: 'Choose none, flex or slip' },
 );
 export type Joint = z.infer<typeof jointSchema>;
 export type JointType = Joint['type'];
+
+const position = z.number({ error: 'Enter a number' }).nonnegative({ error: 'Position cannot be negative' }).max(BOUNDS.maxSegmentMm * 50, { error: 'Position must lie within the run' });
+
+/** A support part-way along the run; anchors are run ends (end the run there and start a new one). */
+export const SUPPORT_KINDS = ['sliding', 'hanger'] as const;
+export const SUPPORT_LABELS: Record<(typeof SUPPORT_KINDS)[number], string> = { sliding: 'Sliding support', hanger: 'Hanger' };
+export const supportSchema = z.object({
+  kind: z.enum(SUPPORT_KINDS, { error: 'Choose a sliding support or a hanger' }),
+  atMm: position,
+});
+export type Support = z.infer<typeof supportSchema>;
+
+/** Something near the hot pipe: what it is, where along the run, and the gap to it cold. */
+export const nearbyItemSchema = z.object({
+  kind: z.enum(NEARBY_KINDS, { error: 'Choose what it is' }),
+  label: z.string({ error: 'Name it' }).trim().max(80, { error: 'Use at most 80 characters' }),
+  atMm: position,
+  coldGapMm: z.number({ error: 'Enter a number' }).nonnegative({ error: 'Gap cannot be negative' }).max(2000, { error: 'At most 2000 mm' }),
+  /** Beside the pipe (the gap closes by the pipe's swelling and sideways movement) or in line with it (by its movement along its length). */
+  direction: z.enum(['beside', 'in_line'], { error: 'Choose beside or in line' }),
+});
+export type NearbyItem = z.infer<typeof nearbyItemSchema>;
 
 const runFieldsShape = {
   name: text('a run name', 120),
@@ -81,6 +112,8 @@ const runFieldsShape = {
   startFixing: fixedPointSchema,
   endFixing: fixedPointSchema,
   joint: jointSchema,
+  supports: z.array(supportSchema).max(50, { error: 'Use at most 50 supports' }),
+  nearby: z.array(nearbyItemSchema).max(50, { error: 'Use at most 50 nearby items' }),
   notes,
 };
 
@@ -89,6 +122,13 @@ export type RunFields = z.infer<typeof runFieldsObject>;
 
 /** The checks that span fields (flex position within the run, sleeve bore), as the calculator makes them. */
 function crossChecks(run: RunFields, ctx: z.RefinementCtx): void {
+  const length = run.segments.reduce((sum, s) => sum + s.lengthMm, 0);
+  const within = (atMm: number, path: (string | number)[]) => {
+    if (atMm > length) ctx.addIssue({ code: 'custom', path, message: 'Position must lie within the run' });
+  };
+  run.supports.forEach((s, i) => within(s.atMm, ['supports', i, 'atMm']));
+  run.nearby.forEach((n, i) => within(n.atMm, ['nearby', i, 'atMm']));
+  if (run.joint.type === 'slip' && run.joint.atMm !== undefined) within(run.joint.atMm, ['joint', 'atMm']);
   const parsed = calcRunRequestSchema.safeParse(toCalcRequest(run));
   if (parsed.success) return;
   for (const issue of parsed.error.issues) {
@@ -107,6 +147,8 @@ export const runCreateSchema = z
     startFixing: fixedPointSchema.default('flange'),
     endFixing: fixedPointSchema.default('flange'),
     joint: jointSchema.default({ type: 'none' }),
+    supports: runFieldsShape.supports.default([]),
+    nearby: runFieldsShape.nearby.default([]),
     notes: notes.default(''),
     position: z.number({ error: 'Enter a whole number' }).int({ error: 'Enter a whole number' }).min(1, { error: 'Positions start at 1' }).optional(),
   })
@@ -209,6 +251,8 @@ export interface JobView {
 export interface JobDetail extends JobView {
   runs: RunView[];
   totals: JobTotals;
+  /** Supports, clearances and what is wrong with the job as a system (shared/jobs/system-check.ts). */
+  system: SystemCheck;
 }
 
 export interface JobSummary {

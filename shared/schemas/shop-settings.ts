@@ -2,6 +2,8 @@ import { z } from 'zod';
 import { DEFAULT_DESIGN_BASIS } from '../engine/design-basis';
 import type { DesignBasis } from '../engine/types';
 import { ALLOY_FAMILIES, type AlloyFamily } from './alloy';
+import { DEFAULT_NEARBY_MINIMUMS_MM, NEARBY_KINDS, type NearbyKind } from '../jobs/nearby';
+import { DEFAULT_SYSTEM_BASIS, type SystemBasis } from '../jobs/system-basis';
 
 const money = (what: string) => z.number({ error: `${what} must be a number` }).min(0, { error: `${what} cannot be negative` });
 const factor = z.number({ error: 'Enter a factor' }).min(0.1, { error: 'At least 0.1' }).max(10, { error: 'At most 10' });
@@ -30,6 +32,27 @@ export const shopSettingsSchema = z.object({
     .min(-50, { error: 'At least −50 °C, the lowest the calculator handles' })
     .max(40, { error: 'At most 40 °C' })
     .default(DEFAULT_DESIGN_BASIS.coldestAmbientC),
+  /** A sliding support or hanger within this distance on each side of every flex and slip joint. */
+  supportNearJointMm: z
+    .number({ error: 'Enter a distance' })
+    .min(10, { error: 'At least 10 mm' })
+    .max(2000, { error: 'At most 2000 mm' })
+    .default(DEFAULT_SYSTEM_BASIS.supportNearJointMm),
+  /** The first support after a turbo or manifold flange within this distance, so the flange does not carry the pipe. */
+  engineSupportMm: z
+    .number({ error: 'Enter a distance' })
+    .min(10, { error: 'At least 10 mm' })
+    .max(3000, { error: 'At most 3000 mm' })
+    .default(DEFAULT_SYSTEM_BASIS.engineSupportMm),
+  /** Hot gap kept to each kind of nearby item. */
+  nearbyMinimumsMm: z
+    .object(
+      Object.fromEntries(NEARBY_KINDS.map((k) => [k, z.number({ error: 'Enter a gap' }).min(0, { error: 'Cannot be negative' }).max(1000, { error: 'At most 1000 mm' })])) as Record<
+        NearbyKind,
+        z.ZodNumber
+      >,
+    )
+    .default(DEFAULT_NEARBY_MINIMUMS_MM),
   /** True while the values are the seeded demo numbers rather than the shop's own. */
   isDemo: z.boolean().default(false),
 });
@@ -53,8 +76,16 @@ export const DEMO_SHOP_SETTINGS: ShopSettings = {
   marginPct: 25,
   travelSharePct: DEFAULT_DESIGN_BASIS.travelShare * 100,
   coldestStartC: DEFAULT_DESIGN_BASIS.coldestAmbientC,
+  supportNearJointMm: DEFAULT_SYSTEM_BASIS.supportNearJointMm,
+  engineSupportMm: DEFAULT_SYSTEM_BASIS.engineSupportMm,
+  nearbyMinimumsMm: DEFAULT_NEARBY_MINIMUMS_MM,
   isDemo: true,
 };
+
+/** The support and clearance part of the shop settings, as the system check takes it. */
+export function systemBasisOf(settings: Pick<ShopSettings, 'supportNearJointMm' | 'engineSupportMm' | 'nearbyMinimumsMm'>): SystemBasis {
+  return { supportNearJointMm: settings.supportNearJointMm, engineSupportMm: settings.engineSupportMm, nearbyMinimumsMm: settings.nearbyMinimumsMm };
+}
 
 /** The joint-design part of the shop settings, as the calculator takes it. */
 export function designBasisOf(settings: Pick<ShopSettings, 'travelSharePct' | 'coldestStartC'>): DesignBasis {
