@@ -70,6 +70,30 @@ export const colors = {
   navMarker: palette.straw500,
 } as const;
 
+/**
+ * Temperature along the pipe in the system drawing: cool graphite through straw and bronze to
+ * oxide red, stops in °C. Colours between stops are mixed in the drawing.
+ */
+export const heatScale = [
+  { atC: 20, color: palette.graphite300 },
+  { atC: 300, color: palette.straw300 },
+  { atC: 550, color: palette.straw500 },
+  { atC: 750, color: palette.bronze600 },
+  { atC: 950, color: palette.oxide700 },
+] as const;
+
+/** The marks of the system drawing. */
+export const drawing = {
+  pipeOutline: palette.graphite700,
+  fixing: palette.graphite900,
+  support: palette.temper700,
+  joint: palette.temper700,
+  nearbyOk: palette.passive700,
+  nearbyClose: palette.oxide700,
+  text: palette.graphite900,
+  textMuted: palette.graphite600,
+} as const;
+
 export const spacing = {
   none: 0,
   xxs: 2,

@@ -14,6 +14,8 @@ const run: RunFields = {
   startFixing: 'turbo_outlet',
   endFixing: 'v_band',
   joint: { type: 'none' },
+  supports: [],
+  nearby: [],
   notes: '',
 };
 

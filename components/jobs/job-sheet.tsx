@@ -8,6 +8,7 @@ import { Text } from '../ui/text';
 import { show, showMoney } from '../units/format';
 import { runLength, runPeak } from './run-card';
 import { runVerdicts } from './run-verdict';
+import { SystemSection } from './system-section';
 import { cutLengths } from '../../shared/jobs/cut-lengths';
 import { stressFigure } from '../../shared/jobs/stress-figure';
 import { presetWords } from '../runs/flex-section';
@@ -104,6 +105,7 @@ export function JobSheet({ job, units }: { job: JobDetail; units: UnitSystem }) 
       {job.runs.map((run) => (
         <SheetRun key={run.id} run={run} units={units} />
       ))}
+      <SystemSection job={job} units={units} />
       <CautionsNote />
     </View>
   );

@@ -20,6 +20,8 @@ export function newRunFields(runs: RunView[]): RunFields {
     startFixing: last?.endFixing ?? 'flange',
     endFixing: 'flange',
     joint: { type: 'none' },
+    supports: [],
+    nearby: [],
     notes: '',
   };
 }

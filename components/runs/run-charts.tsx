@@ -1,21 +1,10 @@
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
-import type { GrowthPerMetrePoint, RunResult } from '../../shared/engine/types';
+import type { RunResult } from '../../shared/engine/types';
+import { growthPerMetreAt } from '../../shared/jobs/run-movement';
 import { toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
 import { LineChart } from '../charts/line-chart';
 import { show } from '../units/format';
-
-/** Growth per metre at a temperature, straight between the curve's points. */
-export function growthPerMetreAt(curve: GrowthPerMetrePoint[], tempC: number): number | null {
-  for (let i = 1; i < curve.length; i++) {
-    const a = curve[i - 1];
-    const b = curve[i];
-    if (tempC >= a.tempC && tempC <= b.tempC) {
-      return b.tempC === a.tempC ? a.growthMmPerM : a.growthMmPerM + ((tempC - a.tempC) * (b.growthMmPerM - a.growthMmPerM)) / (b.tempC - a.tempC);
-    }
-  }
-  return null;
-}
 
 const fixed = (decimals: number) => (v: number) => v.toFixed(decimals);
 

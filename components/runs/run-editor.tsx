@@ -16,6 +16,8 @@ import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { UnitNumberField } from '../units/unit-number-field';
 import { AlloyPicker } from './alloy-picker';
+import { NearbyField } from './nearby-field';
+import { SupportsField } from './supports-field';
 import { flattenErrors, mergeMessages, type FieldMessages } from './field-errors';
 import { JointFields } from './joint-fields';
 import { RunResults } from './run-results';
@@ -139,6 +141,12 @@ export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabe
             <JointFields value={value} onChange={onChange} peakC={peakC} tubeOdMm={values.tube.odMm} units={units} errors={messages} disabled={!editable} />
           )}
         />
+      </Section>
+      <Section title="Supports along the run" intro="Where the pipe is carried between its ends; the job page checks them against the joints and the engine flange.">
+        <SupportsField control={control} units={units} errors={messages} disabled={!editable} />
+      </Section>
+      <Section title="Near the pipe" intro="Lines, wiring, rubber and panels close to this run; each is checked against its hot gap.">
+        <NearbyField control={control} units={units} errors={messages} disabled={!editable} />
       </Section>
       <Controller
         control={control}

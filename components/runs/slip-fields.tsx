@@ -88,6 +88,7 @@ export function SlipFields({ value, onChange, tubeOdMm, units, errors, disabled 
         {field('Cold engagement', 'length', value.coldEngagementMm, 'joint.coldEngagementMm', (v) => ({ ...value, coldEngagementMm: v }))}
         {field('Cold axial gap', 'length', value.coldAxialGapMm, 'joint.coldAxialGapMm', (v) => ({ ...value, coldAxialGapMm: v }), 'Room left for the growth')}
         {field('Minimum engagement', 'length', value.minEngagementMm, 'joint.minEngagementMm', (v) => ({ ...value, minEngagementMm: optional(v) }), 'Empty: one tube diameter')}
+        {field('Slip joint position from run start', 'length', value.atMm, 'joint.atMm', (v) => ({ ...value, atMm: optional(v) }), 'Empty: the end held by the slip joint, else the run’s end')}
       </View>
     </View>
   );

@@ -6,6 +6,7 @@ import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import { ALLOY_FAMILIES, FAMILY_LABELS } from '../../shared/schemas/alloy';
 import { shopSettingsSchema, type ShopSettings } from '../../shared/schemas/shop-settings';
+import { NEARBY_KINDS, NEARBY_LABELS, type NearbyKind } from '../../shared/jobs/nearby';
 import { NumberField } from '../ui/number-field';
 import { placeServerErrors } from '../ui/server-errors';
 import { Button } from '../ui/button';
@@ -15,7 +16,7 @@ import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 
 type Values = z.input<typeof shopSettingsSchema>;
-type NumberPath = 'labourRatePerHour' | 'hoursPerRun' | 'scrapAllowancePct' | 'marginPct' | 'travelSharePct' | 'coldestStartC' | `weldTimeFactors.${(typeof ALLOY_FAMILIES)[number]}`;
+type NumberPath = 'labourRatePerHour' | 'hoursPerRun' | 'scrapAllowancePct' | 'marginPct' | 'travelSharePct' | 'coldestStartC' | 'supportNearJointMm' | 'engineSupportMm' | `nearbyMinimumsMm.${NearbyKind}` | `weldTimeFactors.${(typeof ALLOY_FAMILIES)[number]}`;
 
 export interface ShopSettingsFormProps {
   defaultValues: ShopSettings;
@@ -121,6 +122,26 @@ export function ShopSettingsForm({ defaultValues, onSubmit }: ShopSettingsFormPr
           hint="The coldest ambient a system starts from; joints are checked from here to the hottest running state"
           error={errors.coldestStartC?.message}
         />
+      </Card>
+      <Card>
+        <Text variant="heading" headingLevel={2}>
+          Supports and clearances
+        </Text>
+        <Text variant="caption" tone="muted">
+          The system check of every job uses these. The defaults are common practice, with no published source; the vehicle or equipment maker’s rules and local codes come first.
+        </Text>
+        <NumberInput control={control} name="supportNearJointMm" label="Support beside a joint within (mm)" hint="On each side of every flex and slip joint" error={errors.supportNearJointMm?.message} />
+        <NumberInput control={control} name="engineSupportMm" label="First support after an engine flange within (mm)" hint="So the turbo or manifold flange does not carry the pipe" error={errors.engineSupportMm?.message} />
+        <Text variant="label">Hot gap to keep, by what sits near the pipe</Text>
+        {NEARBY_KINDS.map((kind) => (
+          <NumberInput
+            key={kind}
+            control={control}
+            name={`nearbyMinimumsMm.${kind}`}
+            label={`Hot gap to a ${NEARBY_LABELS[kind].toLowerCase()} (mm)`}
+            error={errors.nearbyMinimumsMm?.[kind]?.message}
+          />
+        ))}
       </Card>
       {failure ? <ErrorBanner title="The settings were not saved" message={failure} /> : null}
       {saved ? (

@@ -6,6 +6,7 @@ import { LoadFailed } from '../../../../components/jobs/load-failed';
 import { JobTotalsCard } from '../../../../components/jobs/job-totals';
 import { canEditJobs } from '../../../../components/jobs/roles';
 import { RunCard } from '../../../../components/jobs/run-card';
+import { SystemSection } from '../../../../components/jobs/system-section';
 import { ActivitySection } from '../../../../components/ui/activity-list';
 import { Button } from '../../../../components/ui/button';
 import { EmptyState } from '../../../../components/ui/empty-state';
@@ -105,6 +106,7 @@ export default function JobScreen() {
           </View>
         )}
       </View>
+      <SystemSection job={detail} units={units} />
       <ActivitySection intro="Who changed what on this job and its runs, deleted runs included." query={activity} />
       <UnitSwitch />
     </Screen>
