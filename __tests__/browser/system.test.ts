@@ -41,7 +41,7 @@ async function systemOfDemoJob(size: 'phone' | 'desktop', viewport: { width: num
   expect(await checks.innerText()).toMatch(/Manifold collector\) the pipe is held at both ends with no joint/);
   expect(await checks.innerText()).toMatch(/Rear brake line \(brake line\) at 200\.0 mm keeps only .* fit a heat shield or reroute it/);
   const plan = page.getByRole('list', { name: 'Support plan' });
-  expect(await plan.innerText()).toMatch(/Sliding support, Turbo downpipe at 180 mm: Let it slide \d+\.\d+ mm towards the run’s end/);
+  expect(await plan.innerText()).toMatch(/Sliding support, Turbo downpipe at 180\.0 mm: Let it slide \d+\.\d+ mm towards the run’s end/);
   await checks.scrollIntoViewIfNeeded();
   await screenshot(page, `system-${size}-2-checks`);
 

@@ -50,7 +50,7 @@ export function SystemSection({ job, units }: { job: JobDetail; units: UnitSyste
             {s.nearby.map((n) => (
               <View role="listitem" key={`${n.runId}-${n.index}`}>
                 <Text tone={n.ok ? 'success' : 'danger'}>
-                  {n.index + 1}. {n.runName}: {n.message}
+                  {n.index + 1}. {n.runName}: {n.message}.
                 </Text>
               </View>
             ))}

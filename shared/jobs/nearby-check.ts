@@ -44,9 +44,9 @@ export function checkNearby(run: ComputedRun, index: number, minimums: Record<Ne
   const minimum = minimums[item.kind];
   const ok = hot >= minimum;
   const name = item.label ? `${item.label} (${NEARBY_LABELS[item.kind].toLowerCase()})` : NEARBY_LABELS[item.kind];
-  const fire = FIRE_RISK_KINDS.includes(item.kind) ? ' Fuel and brake lines near a hot exhaust skin are a fire risk.' : '';
+  const fire = FIRE_RISK_KINDS.includes(item.kind) ? '. Fuel and brake lines near a hot exhaust skin are a fire risk' : '';
   const message = ok
     ? `${name} at ${r1(item.atMm)} mm keeps ${r1(hot)} mm hot (at least ${r1(minimum)} mm)`
-    : `${name} at ${r1(item.atMm)} mm keeps only ${r1(hot)} mm hot, under the ${r1(minimum)} mm minimum: fit a heat shield or reroute it.${fire}`;
+    : `${name} at ${r1(item.atMm)} mm keeps only ${r1(hot)} mm hot, under the ${r1(minimum)} mm minimum: fit a heat shield or reroute it${fire}`;
   return { runId: run.id, runName: run.name, index, item, tempC, closingMm: closing, hotGapMm: hot, minimumMm: minimum, ok, message };
 }
