@@ -5,7 +5,7 @@ const { spawnSync } = require('node:child_process');
 
 const root = path.resolve(__dirname, '..');
 const distIndex = path.join(root, 'dist', 'index.html');
-const SOURCES = ['app', 'components', 'constants', 'hooks', 'shared', 'assets', 'app.json', 'package.json', 'tsconfig.json'];
+const SOURCES = ['app', 'components', 'constants', 'hooks', 'shared', 'assets', 'app.json', 'package.json', 'tsconfig.json', 'metro.config.js', 'scripts/metro'];
 
 function newestMtime(entry) {
   const full = path.join(root, entry);

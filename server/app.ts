@@ -1,3 +1,4 @@
+import compression from 'compression';
 import express from 'express';
 import helmet from 'helmet';
 import type { DataSource } from 'typeorm';
@@ -95,6 +96,8 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
     if (req.secure) res.setHeader('Strict-Transport-Security', 'max-age=31536000; includeSubDomains');
     next();
   });
+  // JavaScript, fonts, JSON and CSV go out gzipped; PDFs and images are already compressed and are left alone.
+  app.use(compression());
 
   const api = express.Router();
   api.use(requestGuards);

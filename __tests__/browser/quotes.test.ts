@@ -65,6 +65,8 @@ describe('sales quotes, sent to a customer who answers through the private link'
     await page.getByText('Demo values').first().waitFor();
     const chart = page.getByRole('img', { name: /^Totals by option\./ });
     await chart.waitFor();
+    // The drawing loads with the first chart.
+    await chart.locator('svg path, svg rect').first().waitFor();
     expect(await chart.locator('svg path, svg rect').count()).toBeGreaterThan(0);
     expect(await chart.getAttribute('aria-label')).toContain('Option 2, Alloy 625 throughout');
     await table.scrollIntoViewIfNeeded();

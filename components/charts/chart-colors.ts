@@ -9,6 +9,16 @@ export const seriesColor = (index: number) => SERIES_COLORS[index % SERIES_COLOR
 export const chartAxisStyle = {
   axis: { stroke: colors.borderStrong },
   grid: { stroke: colors.border, strokeDasharray: '2,4' },
-  tickLabels: { fontFamily: fonts.regular, fontSize: typography.caption.fontSize - 1, fill: colors.textMuted, padding: 4 },
-  axisLabel: { fontFamily: fonts.semibold, fontSize: typography.caption.fontSize, fill: colors.text, padding: 32 },
+  tickLabels: {
+    fontFamily: fonts.regular,
+    fontSize: typography.caption.fontSize - 1,
+    fill: colors.textMuted,
+    padding: 4,
+  },
+  axisLabel: {
+    fontFamily: fonts.semibold,
+    fontSize: typography.caption.fontSize,
+    fill: colors.text,
+    padding: 32,
+  },
 };

@@ -2,6 +2,12 @@ import fs from 'node:fs';
 import path from 'node:path';
 import express, { type RequestHandler, Router } from 'express';
 
+/** The export names scripts and fonts after a hash of their content, so a cached copy is never stale. */
+export function isContentHashed(relativePath: string): boolean {
+  const inHashedFolder = relativePath.startsWith(`_expo${path.sep}static${path.sep}`) || relativePath.startsWith(`assets${path.sep}`);
+  return inHashedFolder && /[.-][0-9a-f]{20,}\.[a-z0-9]+$/.test(relativePath);
+}
+
 /**
  * Serves the exported web app; every other GET that is not under /api gets index.html,
  * so that deep links such as /sign-in or /alloys/123 open in the app.
@@ -9,7 +15,15 @@ import express, { type RequestHandler, Router } from 'express';
 export function webApp(webDir: string): Router {
   const router = Router();
   const indexFile = path.join(webDir, 'index.html');
-  router.use(express.static(webDir, { index: false, maxAge: '1h' }));
+  router.use(
+    express.static(webDir, {
+      index: false,
+      maxAge: '1h',
+      setHeaders: (res, filePath) => {
+        if (isContentHashed(path.relative(webDir, filePath))) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+      },
+    }),
+  );
   const fallback: RequestHandler = (req, res, next) => {
     if ((req.method !== 'GET' && req.method !== 'HEAD') || req.path.startsWith('/api/') || req.path === '/api') {
       return next();

@@ -1,0 +1,15 @@
+// Expo's Metro config, with zod's message tables cut to English (see scripts/metro/zod-locales-en.js).
+const path = require('node:path');
+const { getDefaultConfig } = require('expo/metro-config');
+
+const config = getDefaultConfig(__dirname);
+const ZOD_LOCALES = /[\\/]zod[\\/]v4[\\/]locales[\\/]index\.c?js$/;
+const ENGLISH_ONLY = path.join(__dirname, 'scripts', 'metro', 'zod-locales-en.js');
+
+config.resolver.resolveRequest = (context, moduleName, platform) => {
+  const resolved = context.resolveRequest(context, moduleName, platform);
+  if (resolved.type === 'sourceFile' && ZOD_LOCALES.test(resolved.filePath)) return { type: 'sourceFile', filePath: ENGLISH_ONLY };
+  return resolved;
+};
+
+module.exports = config;
