@@ -36,6 +36,11 @@ const COLUMNS: Record<string, [number, number][]> = { 'b31-3-c1-hr': B31_3.aus25
 /** EN 10095 tables (mean from 20 °C at 200 °C steps), by source key and alloy; the seed moves them to the alloy's own basis. */
 const EN_10095: Record<string, Record<string, Record<number, number>>> = {
   'en-10095-14876': { N08810: EN_10095_CTE['1.4876'] },
+  // From memory, to be verified: the same table's rows for 1.4833 (309S) and 1.4845 (310S); no public copy was found.
+  'memory-en10095-hr': {
+    S30908: { 200: 16.0, 400: 17.5, 600: 18.0, 800: 18.5, 1000: 19.5 },
+    S31008: { 200: 15.5, 400: 17.0, 600: 17.5, 800: 18.0, 1000: 19.0 },
+  },
 };
 /** Sources whose own points are 200 °C apart: a knot on one of them may sit up to one such step above the knot below. */
 const OWN_200_STEP = Object.keys(EN_10095);
@@ -185,6 +190,19 @@ describe('seed catalogue: tables are dense enough for linear strain interpolatio
     const a = clone(byUns('N08810'));
     a.cte = a.cte.filter((p) => p.tempC !== 800);
     expect(gaps(a).some((g) => g.gap > 201.2)).toBe(true);
+  });
+
+  it('when a table hands over from a B31.3 column to EN 10095 points, then both sources are named in its cautions and the recalled ones are flagged', () => {
+    for (const uns of ['N08810', 'S30908', 'S31008']) {
+      const a = byUns(uns);
+      const keys = [...new Set(a.cte.map((p) => p.source))];
+      expect(keys).toHaveLength(2);
+      expect(keys[0]).toMatch(/^b31-3-c1-/);
+      expect(a.cte.filter((p) => !p.source.startsWith('b31-3-c1-')).map((p) => p.tempC)).toEqual([600, 800, 1000]);
+      expect(a.dataCautions).toMatch(/B31\.3/);
+      expect(a.dataCautions).toMatch(/EN 10095/);
+    }
+    for (const uns of ['S30908', 'S31008']) expect(byUns(uns).dataCautions).toMatch(/recalled from memory[^.]*to be verified/);
   });
 
   it('when the sparse titanium tables are read, then their cautions say so', () => {
