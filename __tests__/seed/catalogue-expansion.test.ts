@@ -16,6 +16,8 @@ const TE1_2001_GROUP1_B_ALL: [number, number][] = [[100, 6.5], [150, 6.6], [200,
 
 
 const SHEETS: Record<string, Record<number, number>> = {
+  // Stockholder data page 1.4016 (430), from 20 °C: the EN 10088-1 series the seed had recalled for the ferritic grades.
+  'ds-14016-stockholder': { 100: 10.0, 200: 10.0, 300: 10.5, 400: 10.5, 500: 11.0 },
   // Stockholder data page 1.4512 (409), from 20 °C.
   'ds-14512-stockholder': { 100: 10.5, 200: 11.0, 300: 11.5, 400: 12.0, 500: 12.0 },
   // Producer data sheet Alloy 718, from 25 °C.
