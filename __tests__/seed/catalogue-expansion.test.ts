@@ -4,7 +4,7 @@
  * second published source gives the same point, and exact transcription where a table is cited.
  */
 import { CAUTION_MARGIN_C } from '../../shared/engine/limits';
-import { B31_3, b31Strain, CALLISTER_CP_TI_CTE, enAnnexC, enCarbon, fToC, PER_F_TO_PER_K, TE1_2001_GROUP1_B } from './oracles';
+import { B31_3, b31Strain, CALLISTER_CP_TI_CTE, EN_10095_CTE, enAnnexC, enCarbon, enMeanOnBasis, fToC, PER_F_TO_PER_K, TE1_2001_GROUP1_B } from './oracles';
 import { type Alloy, byUns, catalogue, clone, knots, relErr, strainAt, strainFrom, topOf } from './seed-catalogue';
 
 const GRADES_18_8 = ['S30400', 'S30409', 'S31603', 'S31635', 'S32100', 'S32109', 'S34700'];
@@ -16,6 +16,8 @@ const TE1_2001_GROUP1_B_ALL: [number, number][] = [[100, 6.5], [150, 6.6], [200,
 
 
 const SHEETS: Record<string, Record<number, number>> = {
+  // Stockholder data page 1.4016 (430), from 20 °C: the EN 10088-1 series the seed had recalled for the ferritic grades.
+  'ds-14016-stockholder': { 100: 10.0, 200: 10.0, 300: 10.5, 400: 10.5, 500: 11.0 },
   // Stockholder data page 1.4512 (409), from 20 °C.
   'ds-14512-stockholder': { 100: 10.5, 200: 11.0, 300: 11.5, 400: 12.0, 500: 12.0 },
   // Producer data sheet Alloy 718, from 25 °C.
@@ -33,6 +35,17 @@ const SHEETS: Record<string, Record<number, number>> = {
   'memory-alloy-x-cte': { 204: 14.2, 316: 14.6, 427: 14.9 },
 };
 const COLUMNS: Record<string, [number, number][]> = { 'b31-3-c1-hr': B31_3.aus25_20, 'b31-3-c1-n800': B31_3.alloy800, 'b31-3-c1-ni': B31_3.alloy600_625 };
+/** EN 10095 tables (mean from 20 °C at 200 °C steps), by source key and alloy; the seed moves them to the alloy's own basis. */
+const EN_10095: Record<string, Record<string, Record<number, number>>> = {
+  'en-10095-14876': { N08810: EN_10095_CTE['1.4876'] },
+  // From memory, to be verified: the same table's rows for 1.4833 (309S) and 1.4845 (310S); no public copy was found.
+  'memory-en10095-hr': {
+    S30908: { 200: 16.0, 400: 17.5, 600: 18.0, 800: 18.5, 1000: 19.5 },
+    S31008: { 200: 15.5, 400: 17.0, 600: 17.5, 800: 18.0, 1000: 19.0 },
+  },
+};
+/** Sources whose own points are 200 °C apart: a knot on one of them may sit up to one such step above the knot below. */
+const OWN_200_STEP = Object.keys(EN_10095);
 
 /** The value a point must have, from the table or formula its source key names; undefined when nothing here holds it. */
 function expectedCte(a: Alloy, p: { tempC: number; source: string }): number | undefined {
@@ -41,6 +54,8 @@ function expectedCte(a: Alloy, p: { tempC: number; source: string }): number | u
     const row = TE1_2001_GROUP1_B_ALL.find(([f]) => fToC(f) === p.tempC);
     return row ? Math.round(row[1] * PER_F_TO_PER_K * 1000) / 1000 : undefined;
   }
+  const en = EN_10095[p.source]?.[a.uns];
+  if (en) return en[p.tempC] === undefined ? undefined : enMeanOnBasis(en, p.tempC, a.referenceTempC);
   const col = COLUMNS[p.source]?.find(([f]) => fToC(f) === p.tempC);
   if (col) return (b31Strain(col[1]) / (col[0] - 70)) * PER_F_TO_PER_K * 1e6;
   return SHEETS[p.source]?.[p.tempC];
@@ -87,13 +102,17 @@ function curvatureGap(a: Alloy): number {
   return worst;
 }
 
-const maxGap = (a: Alloy) => Math.max(...knots(a).slice(1).map((p, i) => p.t - knots(a)[i].t));
+/** Knot spacing, each interval named by the source of its upper point. */
+const gaps = (a: Alloy) => knots(a).slice(1).map((p, i) => ({ gap: p.t - knots(a)[i].t, source: a.cte[i].source }));
+/** Widest interval, leaving out those that end on a point of a 200 °C-step source (checked on their own). */
+const maxGap = (a: Alloy) => Math.max(...gaps(a).filter((g) => !OWN_200_STEP.includes(g.source)).map((g) => g.gap));
 
 describe('seed catalogue: expansion tables reach each alloy\'s limits', () => {
   it('when each table is read, then it rises, stays plausible for the family and reaches the highest limit plus the caution band', () => {
     const range: Record<string, [number, number]> = {
       austenitic_stainless: [15.5, 20], ferritic_stainless: [9.5, 12.5], nickel_chromium: [12.5, 18.5],
-      nickel_iron_chromium: [14, 17.5], titanium: [8, 10], carbon_steel: [11.5, 15.5],
+      // nickel-iron-chromium to 19: EN 10095 gives 18.5 for 1.4876 (the Alloy 800 composition) from 20 to 1000 °C.
+      nickel_iron_chromium: [14, 19], titanium: [8, 10], carbon_steel: [11.5, 15.5],
     };
     const short: string[] = [];
     for (const a of catalogue.alloys) {
@@ -165,6 +184,29 @@ describe('seed catalogue: tables are dense enough for linear strain interpolatio
     expect(problems).toEqual([]);
   });
 
+  it('when a table follows a 200 °C-step standard, then only its intervals ending on that standard\'s points are wider than 140 °C, and by at most one step', () => {
+    const wide = catalogue.alloys.flatMap((a) => gaps(a).filter((g) => OWN_200_STEP.includes(g.source)).map((g) => ({ uns: a.uns, ...g })));
+    expect(wide.length).toBeGreaterThan(0);
+    wide.forEach((g) => expect(g.gap).toBeLessThanOrEqual(201.2)); // 398.9 → 600 °C, where the B31.3 column hands over
+    // The widened check still catches a table that skips one of the standard's points.
+    const a = clone(byUns('N08810'));
+    a.cte = a.cte.filter((p) => p.tempC !== 800);
+    expect(gaps(a).some((g) => g.gap > 201.2)).toBe(true);
+  });
+
+  it('when a table hands over from a B31.3 column to EN 10095 points, then both sources are named in its cautions and the recalled ones are flagged', () => {
+    for (const uns of ['N08810', 'S30908', 'S31008']) {
+      const a = byUns(uns);
+      const keys = [...new Set(a.cte.map((p) => p.source))];
+      expect(keys).toHaveLength(2);
+      expect(keys[0]).toMatch(/^b31-3-c1-/);
+      expect(a.cte.filter((p) => !p.source.startsWith('b31-3-c1-')).map((p) => p.tempC)).toEqual([600, 800, 1000]);
+      expect(a.dataCautions).toMatch(/B31\.3/);
+      expect(a.dataCautions).toMatch(/EN 10095/);
+    }
+    for (const uns of ['S30908', 'S31008']) expect(byUns(uns).dataCautions).toMatch(/recalled from memory[^.]*to be verified/);
+  });
+
   it('when the sparse titanium tables are read, then their cautions say so', () => {
     for (const uns of SPARSE_KNOWN) expect(byUns(uns).dataCautions).toMatch(/three published points/);
   });
@@ -226,6 +268,19 @@ describe('seed catalogue: a second published source agrees within 2 %', () => {
   it('when Alloy 625 is compared with the B31.3 600/625 column, then it is on it, where the old table ran 5–6 % below', () => {
     const a = byUns('N06625');
     for (const [f, c] of B31_3.alloy600_625) expect(relErr(strainFrom(a, 21.1, fToC(f)), b31Strain(c))).toBeLessThan(0.002);
+  });
+
+  it('when Alloy 800H below 400 °C is compared, then EN 10095 (1.4876) runs 3–5 % under the B31.3 Alloy 800/825 column, which is why the table keeps the column there', () => {
+    // Both published, both mean coefficients: EN from 20 °C, B31.3 from 70 °F (21.1 °C); 1.1 °C of basis changes either by under 0.1 %.
+    const col = (f: number) => (b31Strain(B31_3.alloy800.find(([x]) => x === f)![1]) / (f - 70)) * PER_F_TO_PER_K * 1e6;
+    const colAt200C = col(350) + ((col(400) - col(350)) * (200 - fToC(350))) / (fToC(400) - fToC(350)); // 392 °F, between the 350 and 400 °F rows
+    const en = EN_10095_CTE['1.4876'];
+    expect(en[200] / colAt200C - 1).toBeCloseTo(-0.048, 2);
+    expect(en[400] / col(750) - 1).toBeCloseTo(-0.029, 2); // 400 °C against the 750 °F (398.9 °C) row
+    // The seed carries the column, not the lower EN values, up to 398.9 °C.
+    const a = byUns('N08810');
+    expect(a.cte.filter((p) => p.tempC < 400).every((p) => p.source === 'b31-3-c1-n800')).toBe(true);
+    expect(a.cte.filter((p) => p.tempC > 400).map((p) => p.tempC)).toEqual([600, 800, 1000]);
   });
 
   it('when 310S is compared with 304 at 800 °F, then it expands about 11 % less (its own B31.3 column, not the 18/8 curve)', () => {

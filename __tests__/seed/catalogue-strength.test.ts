@@ -76,6 +76,8 @@ describe('seed catalogue: yield on one basis, minimum 0.2 % proof', () => {
     // Tube supplier page, 321/321H: 205 MPa (30 ksi) minimum; the old 347 and 309S/310S typical values (276, 310 MPa) are gone.
     expect(byUns('S32100').yield[0]).toEqual({ tempC: 20, mpa: 205, source: 'ds-321-tube-min' });
     for (const uns of ['S34700', 'S30908', 'S31008']) expect(byUns(uns).yield[0].mpa).toBe(205);
+    // EN 10095, grade 1.4876 (the Alloy 800 composition): Rp0.2 at least 170 MPa, read, where the seed once recalled it.
+    expect(byUns('N08810').yield).toEqual([{ tempC: 20, mpa: 170, source: 'en-10095-14876' }]);
     // The lower 304L minimum is below 304's at every temperature the EN tables give.
     byUns('S30400').yield.forEach((p, i) => expect(p.mpa).toBeLessThanOrEqual(byUns('S30409').yield[i].mpa));
   });

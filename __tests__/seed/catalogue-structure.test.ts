@@ -139,6 +139,9 @@ describe('seed catalogue: what is lowered or still to be verified is said on the
     expect(toBeVerified(cited('S30400'), isMemory)).toEqual(['yield at 20–550 °C (11 points)']);
     // Alloy X: three recalled expansion points fill the producer sheet's gap.
     expect(toBeVerified(cited('N06002'), isMemory)).toEqual(['expansion at 204, 316, 427 °C', 'yield at 20 °C']);
+    // 310S: the EN 10095 points above the B31.3 column are recalled; 800H: everything read (EN 10095 gives its limit and minimum proof strength).
+    expect(toBeVerified(cited('S31008'), isMemory)).toEqual(['density', 'expansion at 600, 800, 1000 °C']);
+    expect(toBeVerified(cited('N08810'), isMemory)).toEqual([]);
     // 409: everything read from the stockholder sheet except the service limits.
     expect(toBeVerified(cited('S40910'), isMemory)).toEqual(['service limits']);
   });

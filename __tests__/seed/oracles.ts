@@ -32,6 +32,19 @@ export const B31_3 = {
   alloy800: column([0.28, 0.76, 1.23, 1.76, 2.30, 2.88, 3.48, 4.04, 4.59, 5.16, 5.72, 6.30, 6.88, 7.47]),
   alloy600_625: column([0.26, 0.70, 1.15, 1.61, 2.09, 2.56, 3.05, 3.53, 4.02, 4.52, 5.02, 5.53, 6.05, 6.57]),
 };
+/**
+ * EN 10095:1999, heat-resisting steels: mean coefficient of linear expansion from 20 °C, 1e-6/K, at the
+ * standard's own points (every 200 °C), as read in a public reproduction (a tube supplier's grade page).
+ */
+export const EN_10095_CTE: Record<string, Record<number, number>> = {
+  '1.4876': { 200: 15.0, 400: 16.0, 600: 17.0, 800: 17.5, 1000: 18.5 }, // X10NiCrAlTi32-21, the Alloy 800 composition
+};
+/**
+ * A mean coefficient from 20 °C (EN data, first point at 200 °C) moved to another reference temperature:
+ * α′ = (α·(T − 20) − α₂₀₀·(ref − 20))/(T − ref), rounded to 0.001 as the seed records it.
+ */
+export const enMeanOnBasis = (table: Record<number, number>, t: number, ref: number) =>
+  Math.round(((table[t] * (t - 20) - table[200] * (ref - 20)) / (t - ref)) * 1000) / 1000;
 /** Strain from 70 °F at a B31.3 row, dimensionless. */
 export const b31Strain = (inPer100ft: number) => inPer100ft * IN_PER_100FT;
 
