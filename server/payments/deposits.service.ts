@@ -11,7 +11,7 @@ import type { ShopSettingsService } from '../settings/shop-settings.service';
 import type { UsersRepository } from '../users/users.repository';
 import { Deposit } from './deposit.entities';
 import { customerReceipt, shopReceipt, type ReceiptFacts } from './deposit-emails';
-import type { DepositsRepository, DepositsStore } from './deposits.repository';
+import type { DepositsStore } from './deposits.repository';
 
 type Actor = Pick<PublicUser, 'id' | 'name' | 'role'>;
 type QuoteFacts = Pick<Quote, 'id' | 'status' | 'acceptedOptionIndex' | 'snapshot'>;

@@ -12,7 +12,7 @@ import { finishedPage, payPage, secondStepPage, TEST_CARDS } from './fake-pay-pa
  * of its own, and webhooks signed the way the provider signs them. No network, no real money.
  */
 
-type Params = Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
+type Params = Record<string, any>;
 
 interface FakeSession {
   id: string;
