@@ -47,6 +47,11 @@ import { ShopSettingsService } from './settings/shop-settings.service';
 import { CurrencyRatesRepository } from './currency/currency-rates.repository';
 import { currencyRatesRouter } from './currency/currency-rates.router';
 import { CurrencyRatesService } from './currency/currency-rates.service';
+import type Stripe from 'stripe';
+import { DepositWebhooks } from './payments/deposit-webhooks';
+import { DepositsStore } from './payments/deposits.repository';
+import { depositsRouter, paymentWebhookRouter, publicDepositRouter } from './payments/deposits.router';
+import { DepositsService } from './payments/deposits.service';
 
 export interface AppOptions {
   /** Where uploaded data sheets are kept. */
@@ -59,6 +64,8 @@ export interface AppOptions {
   trustProxy?: TrustProxy;
   signInLimits?: Partial<SignInLimits>;
   publicLimits?: Partial<PublicLimits>;
+  /** The payment provider's SDK client and webhook signing secret; without them deposits cannot be paid. */
+  payments?: { client: Stripe; webhookSecret: string };
 }
 
 /** Builds the whole Express app on an open DataSource without listening (tests use it directly). */
@@ -99,8 +106,13 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   // JavaScript, fonts, JSON and CSV go out gzipped; PDFs and images are already compressed and are left alone.
   app.use(compression());
 
+  const shopSettings = new ShopSettingsService(dataSource);
+  const depositsStore = new DepositsStore(dataSource);
+  const deposits = new DepositsService(depositsStore, shopSettings, options.payments?.client, options.mailer, usersRepository);
+
   const api = express.Router();
   api.use(requestGuards);
+  api.use(paymentWebhookRouter(new DepositWebhooks(depositsStore, deposits, options.payments?.webhookSecret)));
   api.use(express.json({ limit: '1mb' }));
   api.use(requireSameOrigin(options.publicUrl));
   api.use(loadSession(auth));
@@ -109,17 +121,17 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   });
   api.use('/auth', authRouter(auth, authService));
   api.use('/users', usersRouter(usersService));
-  const shopSettings = new ShopSettingsService(dataSource);
   api.use('/calc', calcRouter(new CalcService(catalogueService, flexPartsService, shopSettings)));
   api.use('/flex-parts', flexPartsRouter(flexPartsService));
   api.use(datasheetsRouter(datasheetsService, options.uploadsDir));
   const currencyRates = new CurrencyRatesService(new CurrencyRatesRepository(dataSource), shopSettings);
   api.use(jobsRouter(new JobsService(new JobsStore(dataSource), new RunResults(catalogueService, flexPartsService, shopSettings, currencyRates))));
-  const quotes = new QuotesService(new QuotesStore(dataSource), new JobsStore(dataSource), catalogueService, shopSettings, usersRepository, options.mailer, currencyRates);
+  const quotes = new QuotesService(new QuotesStore(dataSource), new JobsStore(dataSource), catalogueService, shopSettings, usersRepository, options.mailer, currencyRates, deposits);
   api.use('/currency-rates', currencyRatesRouter(currencyRates));
   api.use('/settings', shopSettingsRouter(shopSettings));
   api.use('/quotes', quotesRouter(quotes, options.publicUrl));
-  api.use('/public', ...publicLimiters({ ...DEFAULT_PUBLIC_LIMITS, ...options.publicLimits }), publicQuotesRouter(quotes, options.publicUrl));
+  api.use(depositsRouter(deposits, options.publicUrl));
+  api.use('/public', ...publicLimiters({ ...DEFAULT_PUBLIC_LIMITS, ...options.publicLimits }), publicQuotesRouter(quotes, options.publicUrl), publicDepositRouter(deposits, options.publicUrl));
   api.use('/outbox', outboxRouter(new OutboxRepository(dataSource)));
   api.use('/me', preferencesRouter(new PreferencesService(new PreferencesRepository(dataSource))));
   api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore, new ImportJobs())));

@@ -46,6 +46,9 @@ const envSchema = z.object({
   PUBLIC_URL: z.url({ protocol: /^https?$/, error: 'must be an http:// or https:// URL' }).optional(),
   TRUST_PROXY: trustProxySchema.default(false),
   WEB_DIR: z.string().min(1).optional(),
+  PAYMENTS_SECRET_KEY: z.string().regex(/^(sk|rk)_/, { error: 'must be the provider’s secret key (sk_… or rk_…)' }).optional(),
+  PAYMENTS_WEBHOOK_SECRET: z.string().regex(/^whsec_/, { error: 'must be the webhook signing secret (whsec_…)' }).optional(),
+  PAYMENTS_API_URL: z.url({ protocol: /^https?$/, error: 'must be an http:// or https:// URL' }).optional(),
 });
 
 export interface Config {
@@ -59,6 +62,15 @@ export interface Config {
   smtpUrl?: string;
   publicUrl?: string;
   trustProxy: TrustProxy;
+  /** The payment provider; absent means the embedded fake provider. */
+  payments?: PaymentsConfig;
+}
+
+export interface PaymentsConfig {
+  secretKey: string;
+  webhookSecret: string;
+  /** Where the provider's API answers; absent means the SDK's own default host. */
+  apiUrl?: string;
 }
 
 export class ConfigError extends Error {}
@@ -74,6 +86,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new ConfigError(`Dilato cannot start: the environment has bad values\n${lines.join('\n')}`);
   }
   const e = parsed.data;
+  const paymentsNamed = [e.PAYMENTS_SECRET_KEY, e.PAYMENTS_WEBHOOK_SECRET, e.PAYMENTS_API_URL].some((v) => v !== undefined);
+  if (paymentsNamed && (!e.PAYMENTS_SECRET_KEY || !e.PAYMENTS_WEBHOOK_SECRET)) {
+    throw new ConfigError(
+      'Dilato cannot start: the environment has bad values\n  PAYMENTS_SECRET_KEY, PAYMENTS_WEBHOOK_SECRET: set both for a real payment provider, or neither for the embedded fake',
+    );
+  }
   const dataDir = path.resolve(e.DATA_DIR);
   return {
     port: e.PORT,
@@ -86,5 +104,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     smtpUrl: e.SMTP_URL,
     publicUrl: e.PUBLIC_URL,
     trustProxy: e.TRUST_PROXY,
+    payments: e.PAYMENTS_SECRET_KEY && e.PAYMENTS_WEBHOOK_SECRET ? { secretKey: e.PAYMENTS_SECRET_KEY, webhookSecret: e.PAYMENTS_WEBHOOK_SECRET, apiUrl: e.PAYMENTS_API_URL } : undefined,
   };
 }

@@ -8,6 +8,8 @@ import { seed } from './seed/seed';
 import { startFakeSmtp } from './mail/fake-smtp';
 import { Mailer } from './mail/mailer';
 import { OutboxRepository } from './mail/outbox.repository';
+import { startFakeProvider } from './payments/fake-provider';
+import { createPaymentsClient } from './payments/payments-client';
 
 async function main() {
   const startedAt = Date.now();
@@ -19,18 +21,26 @@ async function main() {
   // Without SMTP_URL, e-mail goes to an SMTP server of our own that keeps it in the outbox.
   const fakeSmtp = config.smtpUrl ? null : await startFakeSmtp(new OutboxRepository(dataSource));
   const mailer = new Mailer(config.smtpUrl ?? fakeSmtp!.url);
+  // Without the PAYMENTS_* keys, deposits go to a fake payment provider of our own (test cards only).
+  const fakePayments = config.payments ? null : await startFakeProvider();
+  const payments = config.payments
+    ? { client: createPaymentsClient(config.payments.secretKey, config.payments.apiUrl), webhookSecret: config.payments.webhookSecret }
+    : { client: createPaymentsClient(fakePayments!.secretKey, fakePayments!.url), webhookSecret: fakePayments!.webhookSecret };
   const app = createApp(dataSource, {
     uploadsDir: config.uploadsDir,
     mailer,
     webDir: config.webDir,
     publicUrl: config.publicUrl,
     trustProxy: config.trustProxy,
+    payments,
   });
 
   const server: Server = app.listen(config.port, () => {
+    fakePayments?.setWebhookTarget(`http://127.0.0.1:${config.port}/api/payments/webhook`);
     console.log(
       `[dilato] listening on http://localhost:${config.port} (data in ${config.dataDir}; ` +
-        `seeded: ${report.alloys} alloys, ${report.sources} sources, ${report.flexParts} flex parts, ${report.demoUsers} demo users, ${report.demoJobs ?? 0} demo jobs; ready in ${Date.now() - startedAt} ms)`,
+        `seeded: ${report.alloys} alloys, ${report.sources} sources, ${report.flexParts} flex parts, ${report.demoUsers} demo users, ${report.demoJobs ?? 0} demo jobs; ready in ${Date.now() - startedAt} ms)` +
+        (fakePayments ? `; payments: the embedded fake provider at ${fakePayments.url}` : ''),
     );
   });
 
@@ -39,7 +49,7 @@ async function main() {
   const stop = () => {
     server.close(() => {
       mailer.close();
-      void Promise.all([fakeSmtp?.close(), dataSource.destroy()]).finally(() => process.exit(0));
+      void Promise.all([fakeSmtp?.close(), fakePayments?.close(), dataSource.destroy()]).finally(() => process.exit(0));
     });
   };
   process.on('SIGTERM', stop);

@@ -18,6 +18,9 @@ const MATRIX: Record<string, Who> = {
   'GET /api/public/quotes/:token': 'token',
   'POST /api/public/quotes/:token/accept': 'token',
   'POST /api/public/quotes/:token/decline': 'token',
+  'POST /api/public/quotes/:token/deposit': 'token',
+  // The payment provider's webhook: no session and no Origin; its signature is checked instead (payments-webhook tests).
+  'POST /api/payments/webhook': 'anyone',
 
   'GET /api/alloys': 'signed-in',
   'GET /api/alloys/:id': 'signed-in',
@@ -44,6 +47,7 @@ const MATRIX: Record<string, Who> = {
   'GET /api/jobs': 'signed-in',
   'GET /api/jobs/:id': 'signed-in',
   'GET /api/jobs/:id/activity': 'signed-in',
+  'GET /api/jobs/:id/deposits': 'signed-in',
   'POST /api/jobs': SHOP_FLOOR,
   'PATCH /api/jobs/:id': SHOP_FLOOR,
   'POST /api/jobs/:id/runs': SHOP_FLOOR,
@@ -71,6 +75,7 @@ const MATRIX: Record<string, Who> = {
   'PATCH /api/quotes/:id': SELLERS,
   'GET /api/quotes/:id/email-preview': SELLERS,
   'POST /api/quotes/:id/send': SELLERS,
+  'POST /api/quotes/:id/deposit/refund': ADMIN,
   'GET /api/users': ADMIN,
   'POST /api/users': ADMIN,
   'PATCH /api/users/:id': ADMIN,
@@ -123,12 +128,16 @@ describe('the role matrix', () => {
     }
   });
 
-  it('when a request comes with no Origin, then no state-changing route accepts it', async () => {
-    for (const route of Object.keys(MATRIX).filter((r) => !r.startsWith('GET '))) {
+  it('when a request comes with no Origin, then no state-changing route but the signed webhook accepts it', async () => {
+    const webhook = 'POST /api/payments/webhook';
+    for (const route of Object.keys(MATRIX).filter((r) => !r.startsWith('GET ') && r !== webhook)) {
       const [method] = route.split(' ');
       const res = await request(t.app)[method.toLowerCase() as 'post'](url(route, 'customer')).set('Host', HOST).send({});
       expect([route, res.status]).toEqual([route, 403]);
     }
     expect(ORIGIN).toMatch(/^http:/);
+    const unsigned = await request(t.app).post('/api/payments/webhook').set('Host', HOST).set('Content-Type', 'application/json').send('{}');
+    expect(unsigned.status).toBe(400);
+    expectErrorShape(unsigned.body, 'bad_signature');
   });
 });

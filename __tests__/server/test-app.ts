@@ -10,6 +10,8 @@ import { seed } from '../../server/seed/seed';
 import { startFakeSmtp } from '../../server/mail/fake-smtp';
 import { Mailer } from '../../server/mail/mailer';
 import { OutboxRepository } from '../../server/mail/outbox.repository';
+import { startFakeProvider, type FakeProvider } from '../../server/payments/fake-provider';
+import { createPaymentsClient } from '../../server/payments/payments-client';
 import type { Role } from '../../shared/schemas/auth';
 
 export const HOST = 'dilato.test';
@@ -19,6 +21,8 @@ export interface TestApp {
   app: ReturnType<typeof createApp>;
   dataSource: DataSource;
   uploadsDir: string;
+  /** The fake payment provider the app's SDK talks to; its webhooks reach the app through supertest. */
+  payments: FakeProvider;
   close: () => Promise<void>;
 }
 
@@ -34,13 +38,24 @@ export async function createTestApp(options: TestOptions = {}): Promise<TestApp>
   const uploadsDir = options.uploadsDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-uploads-'));
   const smtp = await startFakeSmtp(new OutboxRepository(dataSource));
   const mailer = new Mailer(smtp.url);
-  const app = createApp(dataSource, { ...options, uploadsDir, mailer: options.mailer ?? mailer });
+  const payments = await startFakeProvider();
+  const app = createApp(dataSource, {
+    ...options,
+    uploadsDir,
+    mailer: options.mailer ?? mailer,
+    payments: { client: createPaymentsClient(payments.secretKey, payments.url), webhookSecret: payments.webhookSecret },
+  });
+  payments.setWebhookTarget((payload, signature) =>
+    request(app).post('/api/payments/webhook').set('Host', HOST).set('Content-Type', 'application/json').set('Stripe-Signature', signature).send(payload),
+  );
   return {
     app,
     dataSource,
     uploadsDir,
+    payments,
     close: async () => {
       mailer.close();
+      await payments.close();
       await smtp.close();
       await dataSource.destroy();
       fs.rmSync(uploadsDir, { recursive: true, force: true });

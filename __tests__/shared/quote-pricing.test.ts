@@ -26,6 +26,7 @@ const settings: ShopSettings = {
   weldTimeFactors: { austenitic_stainless: 1, ferritic_stainless: 1, nickel_chromium: 1.5, nickel_iron_chromium: 1.4, titanium: 2, carbon_steel: 0.7 },
   scrapAllowancePct: 10,
   marginPct: 20,
+  depositSharePct: 0,
   travelSharePct: 70,
   coldestStartC: -20,
   supportNearJointMm: 150,

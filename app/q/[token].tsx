@@ -1,4 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
+import { PublicDepositSection } from '../../components/quotes/public-deposit-section';
 import { PublicNotice } from '../../components/quotes/public-notice';
 import { PublicQuotePage } from '../../components/quotes/public-quote-page';
 import { LoadingState } from '../../components/ui/loading-state';
@@ -8,7 +9,7 @@ import { usePublicDecisionMutation, usePublicQuoteQuery } from '../../hooks/use-
 
 /** The customer's private link: no account, and no way from here into the shop's app. */
 export default function PublicQuoteScreen() {
-  const { token = '' } = useLocalSearchParams<{ token: string }>();
+  const { token = '', deposit: returnedFromPayment } = useLocalSearchParams<{ token: string; deposit?: string }>();
   const quote = usePublicQuoteQuery(token);
   const decide = usePublicDecisionMutation(token);
 
@@ -29,7 +30,11 @@ export default function PublicQuoteScreen() {
   }
   return (
     <Screen wide>
-      <PublicQuotePage quote={quote.data} onDecide={(decision) => decide.mutateAsync(decision)} />
+      <PublicQuotePage
+        quote={quote.data}
+        onDecide={(decision) => decide.mutateAsync(decision)}
+        depositSection={<PublicDepositSection token={token} quote={quote.data} returned={Boolean(returnedFromPayment)} onRefresh={() => void quote.refetch()} />}
+      />
     </Screen>
   );
 }

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { type ReactNode, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '../../constants/theme';
 import type { PublicDecision } from '../../hooks/use-public-quote';
@@ -13,12 +13,14 @@ import { PublicOptionCard } from './public-option-card';
 export interface PublicQuotePageProps {
   quote: PublicQuoteView;
   onDecide: (decision: PublicDecision) => Promise<unknown>;
+  /** Shown under the decision: the deposit once the quote is accepted. */
+  depositSection?: ReactNode;
 }
 
 type Step = { kind: 'choosing' } | { kind: 'accepting'; index: number } | { kind: 'declining' };
 
 /** The customer's view of one quote through its private link; nothing of the shop's app is reachable. */
-export function PublicQuotePage({ quote, onDecide }: PublicQuotePageProps) {
+export function PublicQuotePage({ quote, onDecide, depositSection }: PublicQuotePageProps) {
   const [step, setStep] = useState<Step>({ kind: 'choosing' });
   const [decidedBy, setDecidedBy] = useState<string>();
   const open = quote.status === 'sent' || quote.status === 'viewed';
@@ -41,6 +43,7 @@ export function PublicQuotePage({ quote, onDecide }: PublicQuotePageProps) {
       </View>
 
       <Decided quote={quote} decidedBy={decidedBy} />
+      {depositSection}
 
       <View style={styles.options}>
         {quote.options.map((option, index) => (

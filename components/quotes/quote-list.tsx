@@ -4,6 +4,7 @@ import type { QuoteSummary } from '../../shared/schemas/quotes';
 import { Text } from '../ui/text';
 import { formatMoney } from './format';
 import { LinkList } from './link-row';
+import { DepositBadge } from './deposit-badge';
 import { StatusBadge } from './status-badge';
 
 function totalRange(q: QuoteSummary): string {
@@ -26,6 +27,7 @@ export function QuoteList({ quotes }: { quotes: QuoteSummary[] }) {
             <Text variant="bodyStrong">{q.number}</Text>
             <StatusBadge status={q.status} />
           </View>
+          {q.deposit ? <DepositBadge deposit={q.deposit} /> : null}
           <Text>
             {q.customerName}
             {q.customerCompany ? `, ${q.customerCompany}` : ''}

@@ -16,7 +16,7 @@ import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 
 type Values = z.input<typeof shopSettingsSchema>;
-type NumberPath = 'labourRatePerHour' | 'hoursPerRun' | 'scrapAllowancePct' | 'marginPct' | 'travelSharePct' | 'coldestStartC' | 'supportNearJointMm' | 'engineSupportMm' | `nearbyMinimumsMm.${NearbyKind}` | `weldTimeFactors.${(typeof ALLOY_FAMILIES)[number]}`;
+type NumberPath = 'labourRatePerHour' | 'hoursPerRun' | 'scrapAllowancePct' | 'marginPct' | 'depositSharePct' | 'travelSharePct' | 'coldestStartC' | 'supportNearJointMm' | 'engineSupportMm' | `nearbyMinimumsMm.${NearbyKind}` | `weldTimeFactors.${(typeof ALLOY_FAMILIES)[number]}`;
 
 export interface ShopSettingsFormProps {
   defaultValues: ShopSettings;
@@ -100,6 +100,7 @@ export function ShopSettingsForm({ defaultValues, onSubmit }: ShopSettingsFormPr
         </Text>
         <NumberInput control={control} name="scrapAllowancePct" label="Scrap allowance (%)" hint="Added to the material cost for offcuts and test pieces" error={errors.scrapAllowancePct?.message} />
         <NumberInput control={control} name="marginPct" label="Margin (%)" hint="On material and labour together" error={errors.marginPct?.message} />
+        <NumberInput control={control} name="depositSharePct" label="Deposit on acceptance (%)" hint="Whole percent of the accepted total, paid online; 0 turns deposits off" error={errors.depositSharePct?.message} />
       </Card>
       <Card>
         <Text variant="heading" headingLevel={2}>

@@ -13,6 +13,7 @@ const ACTION_LABELS: Record<ActivityAction, string> = {
   duplicated: 'made as a copy',
   reordered: 'runs put in a new order',
   sent: 'sent',
+  refunded: 'deposit refunded',
 };
 const SUBJECT_LABELS: Record<ActivityView['subject'], string> = { job: 'Job', run: 'Run', quote: 'Quote' };
 const SHOWN_CHANGES = 4;

@@ -22,6 +22,8 @@ import { FlexPartRatings1764600400000 } from './migrations/1764600400000-flex-pa
 import { AlloyDataCautions1764600500000 } from './migrations/1764600500000-alloy-data-cautions';
 import { CurrencyRates1764600510000 } from './migrations/1764600510000-currency-rates';
 import { CurrencyRate } from '../currency/currency-rate.entity';
+import { Deposit, PaymentEventSeen } from '../payments/deposit.entities';
+import { QuoteDeposits1764600900000 } from './migrations/1764600900000-quote-deposits';
 
 export const ENTITIES = [
   User,
@@ -42,6 +44,8 @@ export const ENTITIES = [
   CurrencyRate,
   SignInAddress,
   ActivityEntry,
+  Deposit,
+  PaymentEventSeen,
 ];
 export const MIGRATIONS = [
   UsersAndSessions1764600000000,
@@ -55,6 +59,7 @@ export const MIGRATIONS = [
   SignInAddresses1764600600000,
   Activity1764600610000,
   RunSupportsAndNearby1764600700000,
+  QuoteDeposits1764600900000,
 ];
 
 /** `database` is a file path, or ':memory:' for tests. */

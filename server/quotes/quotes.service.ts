@@ -17,6 +17,12 @@ import type { UsersRepository } from '../users/users.repository';
 import { decisionMail, money, quoteMail } from './quote-emails';
 import { Quote } from './quote.entities';
 import type { QuotesRepository, QuotesStore } from './quotes.repository';
+import type { DepositView } from '../../shared/schemas/deposits';
+
+/** Where a quote's deposit stands (the payments feature answers). */
+export interface DepositViews {
+  viewOf(quote: Pick<Quote, 'id' | 'status' | 'acceptedOptionIndex' | 'snapshot'>): Promise<DepositView | null>;
+}
 
 type Actor = Pick<PublicUser, 'id' | 'name' | 'role'>;
 
@@ -37,7 +43,12 @@ export class QuotesService {
     private readonly users: UsersRepository,
     private readonly mailer: Mailer,
     private readonly currencyRates?: CurrencyRatesService,
+    private readonly deposits?: DepositViews,
   ) {}
+
+  private depositOf(quote: Quote): Promise<DepositView | null> {
+    return this.deposits ? this.deposits.viewOf(quote) : Promise.resolve(null);
+  }
 
   // ---- pricing ----
 
@@ -144,6 +155,7 @@ export class QuotesService {
       createdAt: new Date(quote.createdAt).toISOString(),
       sentAt: quote.sentAt ? new Date(quote.sentAt).toISOString() : null,
       events: events.map((e) => ({ at: new Date(e.at).toISOString(), status: e.status, note: e.note, by: e.by })),
+      deposit: await this.depositOf(quote),
     };
   }
 
@@ -169,6 +181,7 @@ export class QuotesService {
         totalFrom: totals.length ? Math.min(...totals) : null,
         totalTo: totals.length ? Math.max(...totals) : null,
         updatedAt: new Date(q.updatedAt).toISOString(),
+        deposit: await this.depositOf(q),
       });
     }
     return items;
@@ -308,6 +321,7 @@ export class QuotesService {
       status: quote.status,
       currency: pricing.currency,
       acceptedOptionIndex: quote.acceptedOptionIndex,
+      deposit: await this.depositOf(quote),
       options: pricing.options.map((o, i) => ({
         label: o.label,
         total: o.total,

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import type { ShopSettings } from './shop-settings';
 import type { OptionComparison, PricedAlloy, PricedOption, PricedRunInput } from '../quotes/pricing';
 import { emailSchema } from './auth';
+import type { DepositView } from './deposits';
 
 export const QUOTE_STATUSES = ['draft', 'sent', 'viewed', 'accepted', 'declined', 'expired'] as const;
 export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
@@ -89,6 +90,8 @@ export interface QuoteView {
   createdAt: string;
   sentAt: string | null;
   events: QuoteEventView[];
+  /** The deposit asked for on acceptance; null when none is asked. */
+  deposit?: DepositView | null;
 }
 
 export interface QuoteSummary {
@@ -104,6 +107,7 @@ export interface QuoteSummary {
   totalFrom: number | null;
   totalTo: number | null;
   updatedAt: string;
+  deposit?: DepositView | null;
 }
 
 /** What the customer sees through the private link: the options and nothing else of the shop. */
@@ -118,6 +122,7 @@ export interface PublicQuoteView {
   status: QuoteStatus;
   currency: string;
   acceptedOptionIndex: number | null;
+  deposit?: DepositView | null;
   options: {
     label: string;
     total: number;

@@ -20,6 +20,13 @@ export const shopSettingsSchema = z.object({
   ),
   scrapAllowancePct: z.number({ error: 'Enter a percentage' }).min(0, { error: 'Cannot be negative' }).max(100, { error: 'At most 100 %' }),
   marginPct: z.number({ error: 'Enter a percentage' }).min(0, { error: 'Cannot be negative' }).max(300, { error: 'At most 300 %' }),
+  /** Whole percent of an accepted quote's total the customer pays up front; 0 turns deposits off. */
+  depositSharePct: z
+    .number({ error: 'Enter a percentage' })
+    .int({ error: 'Use a whole percent' })
+    .min(0, { error: 'Cannot be negative' })
+    .max(100, { error: 'At most 100 %' })
+    .default(0),
   /** Share of a flex part's rated travel, or of a slip joint's gap, the computed movement may use. */
   travelSharePct: z
     .number({ error: 'Enter a percentage' })
@@ -74,6 +81,7 @@ export const DEMO_SHOP_SETTINGS: ShopSettings = {
   },
   scrapAllowancePct: 12,
   marginPct: 25,
+  depositSharePct: 30,
   travelSharePct: DEFAULT_DESIGN_BASIS.travelShare * 100,
   coldestStartC: DEFAULT_DESIGN_BASIS.coldestAmbientC,
   supportNearJointMm: DEFAULT_SYSTEM_BASIS.supportNearJointMm,

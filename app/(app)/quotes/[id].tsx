@@ -1,6 +1,7 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
+import { DepositPanel } from '../../../components/quotes/deposit-panel';
 import { EmailPreviewSection } from '../../../components/quotes/email-preview-section';
 import { HistoryCard, QuoteDetail } from '../../../components/quotes/quote-detail';
 import { QuoteBuilder } from '../../../components/quotes/quote-builder';
@@ -40,6 +41,7 @@ export default function QuoteScreen() {
     <Screen wide>
       <QuoteHeader quote={quote.data} />
       {quote.data.status === 'draft' && canSell ? <DraftEditor quote={quote.data} /> : <QuoteDetail quote={quote.data} />}
+      {quote.data.deposit ? <DepositPanel quoteId={quote.data.id} deposit={quote.data.deposit} canRefund={me.role === 'admin'} /> : null}
       <ActivitySection intro="Who created, changed and sent this quote." query={activity} />
     </Screen>
   );

@@ -2,6 +2,7 @@ import { useLocalSearchParams } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 import { TextLink } from '../../../../components/ui/text-link';
 import { LoadFailed } from '../../../../components/jobs/load-failed';
+import { JobDepositNote } from '../../../../components/jobs/job-deposit-note';
 import { JobSheet } from '../../../../components/jobs/job-sheet';
 import { canPrint, printPage, PrintStyle } from '../../../../components/jobs/print-style';
 import { Button } from '../../../../components/ui/button';
@@ -29,6 +30,7 @@ export default function JobSheetScreen() {
         {canPrint ? <Button label="Print" accessibilityLabel="Print the job sheet" onPress={printPage} /> : null}
       </View>
       <View nativeID="job-sheet">
+        <JobDepositNote jobId={job.data.id} />
         <JobSheet job={job.data} units={units} />
       </View>
     </Screen>
