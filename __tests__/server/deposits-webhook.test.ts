@@ -1,6 +1,8 @@
 import request from 'supertest';
 import Stripe from 'stripe';
-import { acceptedQuote, payOnPage, publicDeposit, shopQuote, startPayment, TEST_CARDS } from './deposit-helpers';
+import { createPaymentsClient } from '../../server/payments/payments-client';
+import { mailTo } from './quote-helpers';
+import { acceptedQuote, payOnPage, publicDeposit, shopQuote, startPayment, TEST_CARDS, untilSent } from './deposit-helpers';
 import { createTestApp, expectErrorShape, HOST, signedIn, type TestApp } from './test-app';
 
 let t: TestApp;
@@ -89,6 +91,33 @@ describe('the payment webhook', () => {
     const latePaid = completedEvent('evt_late_paid_1', paid.data.object);
     expect((await post(latePaid, sign(latePaid))).status).toBe(200);
     expect((await publicDeposit(customer, token))?.status).toBe('refunded');
+  });
+
+  it('when the shop refunds at the provider instead of in Dilato, then the signed event marks the deposit refunded, notes it and sends both receipts once', async () => {
+    const { sales, customer, token, quoteId, url } = await openPayment('refund-at-provider@example.test');
+    await payOnPage(url, TEST_CARDS.succeeds);
+    const paid = await shopQuote(sales, quoteId);
+    expect(paid.deposit?.status).toBe('paid');
+    const refundMails = async () => (await mailTo(sales, 'refund-at-provider@example.test')).filter((m) => m.subject.startsWith('Refund: deposit for quote'));
+    expect(await refundMails()).toHaveLength(0);
+
+    // What the provider's own dashboard does: a refund on the payment, with nothing from Dilato.
+    const provider = createPaymentsClient(t.payments.secretKey, t.payments.url);
+    const session = JSON.parse(t.payments.sent.filter((e) => e.type === 'checkout.session.completed').at(-1)!.payload).data.object;
+    await provider.refunds.create({ payment_intent: session.payment_intent });
+    await untilSent(t, 'charge.refunded', t.payments.sent.filter((e) => e.type === 'charge.refunded').length);
+
+    const after = await shopQuote(sales, quoteId);
+    expect(after.deposit).toMatchObject({ status: 'refunded', refundedAt: expect.any(String), refundReason: null });
+    expect(after.events.filter((e) => e.note.startsWith('Deposit refunded at the payment provider'))).toHaveLength(1);
+    expect((await publicDeposit(customer, token))?.status).toBe('refunded');
+    // The receipts follow the commit, so they may land a moment after the status does.
+    for (let i = 0; i < 50 && (await refundMails()).length === 0; i++) await new Promise((r) => setTimeout(r, 40));
+    expect(await refundMails()).toHaveLength(1);
+
+    const refundEvent = t.payments.sent.filter((e) => e.type === 'charge.refunded').at(-1)!;
+    expect((await post(refundEvent.payload, refundEvent.signature)).body).toEqual({ received: true, handled: false });
+    expect(await refundMails()).toHaveLength(1);
   });
 
   it('when a paid event names another amount than the one asked, then the deposit is not marked paid', async () => {

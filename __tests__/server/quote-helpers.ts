@@ -28,8 +28,8 @@ export async function draftQuote(app: TestApp['app'], sales: Client, email = 'od
 }
 
 /** The messages the embedded SMTP server received for one address. */
-export async function mailTo(sales: Client, to: string): Promise<{ to: string; text: string }[]> {
-  return ((await sales.get('/api/outbox')).body.items as { to: string; text: string }[]).filter((m) => m.to.includes(to));
+export async function mailTo(sales: Client, to: string): Promise<{ to: string; subject: string; text: string }[]> {
+  return ((await sales.get('/api/outbox')).body.items as { to: string; subject: string; text: string }[]).filter((m) => m.to.includes(to));
 }
 
 export const tokenIn = (text: string) => /\/q\/([A-Za-z0-9_-]+)/.exec(text)![1];

@@ -7,7 +7,7 @@ import type { Deposit } from './deposit.entities';
 import type { DepositsRepository, DepositsStore } from './deposits.repository';
 import type { DepositsService } from './deposits.service';
 
-type Receipt = { quote: Quote; deposit: Deposit; origin?: string };
+type Receipt = { quote: Quote; deposit: Deposit; kind: 'paid' | 'refunded'; origin?: string };
 
 /**
  * The provider's signed events, the only way Dilato learns how a payment went. Each event id is
@@ -35,7 +35,8 @@ export class DepositWebhooks {
       if (!(await repo.firstSight(event.id, event.type))) return { handled: false, receipt: null };
       return { handled: true, receipt: await this.apply(repo, event) };
     });
-    if (receipt.receipt) await this.deposits.sendReceipts(receipt.receipt.quote, receipt.receipt.deposit, 'paid', receipt.receipt.origin);
+    const r = receipt.receipt;
+    if (r) await this.deposits.sendReceipts(r.quote, r.deposit, r.kind, r.origin);
     return { handled: receipt.handled };
   }
 
@@ -54,7 +55,7 @@ export class DepositWebhooks {
         await repo.save(deposit);
         const quote = (await repo.quotes.find(deposit.quoteId))!;
         await this.note(repo, quote, `Deposit paid (${formatMinor(deposit.amountMinor, deposit.currency)})`);
-        return { quote, deposit, origin: session.metadata?.origin };
+        return { quote, deposit, kind: 'paid', origin: session.metadata?.origin };
       }
       case 'payment_intent.payment_failed': {
         const intent = event.data.object;
@@ -71,11 +72,14 @@ export class DepositWebhooks {
         const charge = event.data.object;
         const intent = typeof charge.payment_intent === 'string' ? charge.payment_intent : charge.payment_intent?.id;
         const deposit = intent ? await repo.byPaymentIntent(intent) : null;
+        // Still 'paid' here means the refund was made at the provider, not through Dilato's refund
+        // (which marks the deposit refunded and mails the receipts itself): this event is the only news of it.
         if (!deposit || deposit.status !== 'paid') return null;
         Object.assign(deposit, { status: 'refunded', refundedAt: new Date(), updatedAt: new Date() });
         await repo.save(deposit);
-        await this.note(repo, (await repo.quotes.find(deposit.quoteId))!, `Deposit refund confirmed by the payment provider (${formatMinor(deposit.amountMinor, deposit.currency)})`);
-        return null;
+        const quote = (await repo.quotes.find(deposit.quoteId))!;
+        await this.note(repo, quote, `Deposit refunded at the payment provider (${formatMinor(deposit.amountMinor, deposit.currency)})`);
+        return { quote, deposit, kind: 'refunded', origin: typeof charge.metadata?.origin === 'string' ? charge.metadata.origin : undefined };
       }
       default:
         return null;
