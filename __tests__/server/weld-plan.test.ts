@@ -83,6 +83,30 @@ describe('the weld plan of a job', () => {
     expect(plan.openCount).toBe(1);
   });
 
+  it('when the fitted flex part states no cuff alloy, then its cuff welds name no filler; once it states 304, they pair 321 to 304', async () => {
+    const admin = await signedIn(t.app, 'admin');
+    const part = (await admin.get('/api/flex-parts')).body.items.find((p: { code: string }) => p.code === 'DL-FX-63-250');
+    const job = await newJob(admin, 'Cuff alloy');
+    const body = runBody(s321, 700, { tube: { odMm: 63.5, wallMm: 1.651 }, startFixing: 'sliding_bracket', endFixing: 'sliding_bracket', joint: { type: 'flex', atMm: 500, partId: part.id } });
+    await newRun(admin, job.id, body);
+    expect((await admin.patch(`/api/flex-parts/${part.id}`).send({ cuffUns: null })).status).toBe(200);
+    const unstated = welds(await planOf(admin, job.id));
+    expect(unstated.map((w) => [w.status, w.filler])).toEqual([
+      ['metal_unknown', null],
+      ['metal_unknown', null],
+    ]);
+    expect(unstated[0].message).toMatch(/does not state its cuff alloy/);
+    expect((await admin.patch(`/api/flex-parts/${part.id}`).send({ cuffUns: 's30400' })).body.flexPart.cuffUns).toBe('S30400');
+    const stated = welds(await planOf(admin, job.id));
+    // AWS A5.9 annex: ER347, the stabilised filler of the stabilised side, for 304 to 321 (from memory).
+    expect(stated.map((w) => [w.pair, w.filler])).toEqual([
+      ['Type 321 (S32100) to Type 304/304L (S30400)', 'ER347'],
+      ['Type 304/304L (S30400) to Type 321 (S32100)', 'ER347'],
+    ]);
+    // Back to the seed's cuff, so the demo job's plan below sees the part as seeded.
+    expect((await admin.patch(`/api/flex-parts/${part.id}`).send({ cuffUns: 'S32100' })).status).toBe(200);
+  });
+
   it('when a run names a flange alloy that is not in the catalogue, then the run is refused with the field named', async () => {
     const fab = await signedIn(t.app, 'fabricator');
     const job = await newJob(fab, 'Bad flange');

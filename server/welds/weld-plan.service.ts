@@ -30,6 +30,13 @@ export class WeldPlanService {
     return { missing: 'The alloy is not in the catalogue' };
   }
 
+  /** A cuff known by UNS alone takes the catalogue's name and family where the catalogue has that UNS. */
+  private async metalByUns(uns: string): Promise<WeldMetal> {
+    const id = await this.catalogue.alloyIdByUns(uns);
+    const found = id ? await this.metal(id) : null;
+    return found && 'uns' in found ? found : { uns, designation: `UNS ${uns}`, family: null };
+  }
+
   async plan(jobId: string): Promise<WeldPlan> {
     const [job, parts, rules] = await Promise.all([this.jobs.detail(jobId), this.flexParts.list(true), this.rules.list()]);
     const cuffs = new Map(parts.map((p) => [p.id, p.cuffUns]));
@@ -50,14 +57,14 @@ export class WeldPlanService {
       };
     });
     const sites = weldSites(inputs);
-    const alloyIds = [...new Set(sites.flatMap((s) => s.metals).flatMap((m) => ('alloyId' in m ? [m.alloyId] : [])))];
+    const refs = sites.flatMap((s) => s.metals);
+    const alloyIds = [...new Set(refs.flatMap((m) => ('alloyId' in m ? [m.alloyId] : [])))];
     const metals = new Map(await Promise.all(alloyIds.map(async (id) => [id, await this.metal(id)] as const)));
-    const byUns = new Map([...metals.values()].flatMap((m) => ('uns' in m ? [[m.uns, m] as const] : [])));
+    const cuffUns = [...new Set(refs.flatMap((m) => ('uns' in m ? [m.uns] : [])))];
+    const byUns = new Map(await Promise.all(cuffUns.map(async (uns) => [uns, await this.metalByUns(uns)] as const)));
     const lookup = (ref: MetalRef): WeldMetal | { missing: string } => {
       if ('missing' in ref) return ref;
-      if ('alloyId' in ref) return metals.get(ref.alloyId)!;
-      // A cuff known by UNS alone takes the catalogue's name where an alloy in the job carries that UNS.
-      return byUns.get(ref.uns) ?? { uns: ref.uns, designation: `UNS ${ref.uns}`, family: null };
+      return 'alloyId' in ref ? metals.get(ref.alloyId)! : byUns.get(ref.uns)!;
     };
     return weldPlan(job.id, job.runs, sites, lookup, rules);
   }
