@@ -12,7 +12,7 @@ afterAll(async () => {
 });
 
 describe('the weld plan', () => {
-  it('when a fabricator opens the demo road-car downpipe on a phone, then the 321 run lists ER309L to its carbon-steel turbo flange, ER347 at the flex cuffs, and the WPS caution, on the job page and the job sheet', async () => {
+  it('when a fabricator opens the demo road-car downpipe on a phone, then the 321 run lists ER309L to its carbon-steel turbo flange, ER347 at the flex cuffs, and the WPS caution, on the job page and the job sheet, and the run editor names the flange alloy', async () => {
     const { page, context } = await newPage(browser, PHONE);
     await signIn(page, 'fabricator@dilato.test');
     await page.getByRole('heading', { name: / home$/ }).waitFor();
@@ -38,6 +38,15 @@ describe('the weld plan', () => {
     expect((await welds.boundingBox())!.width).toBeLessThanOrEqual(PHONE.width);
     await flange.scrollIntoViewIfNeeded();
     await screenshot(page, 'welds-phone-1-job');
+
+    // The run editor names the flange's alloy under its flanged end.
+    await page.getByRole('link', { name: 'Open Downpipe, turbo to flex', exact: true }).click();
+    await page.getByText('Start flange alloy', { exact: true }).waitFor();
+    await page.getByText('Carbon steel 1020 (G10200)', { exact: true }).waitFor();
+    expect(await page.getByText('End flange alloy', { exact: true }).count()).toBe(0);
+    await page.getByRole('button', { name: 'Same as the tube' }).waitFor();
+    await page.goBack();
+    await page.getByRole('heading', { name: 'Road car downpipe', level: 1 }).waitFor();
 
     await page.getByRole('link', { name: 'Open the job sheet', exact: true }).click();
     await page.getByText('Dilato job sheet', { exact: true }).waitFor();
