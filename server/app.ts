@@ -52,6 +52,10 @@ import { DepositWebhooks } from './payments/deposit-webhooks';
 import { DepositsStore } from './payments/deposits.repository';
 import { depositsRouter, paymentWebhookRouter, publicDepositRouter } from './payments/deposits.router';
 import { DepositsService } from './payments/deposits.service';
+import { WeldPlanService } from './welds/weld-plan.service';
+import { WeldRulesStore } from './welds/weld-rules.repository';
+import { weldPlanRouter, weldRulesRouter } from './welds/weld-rules.router';
+import { WeldRulesService } from './welds/weld-rules.service';
 
 export interface AppOptions {
   /** Where uploaded data sheets are kept. */
@@ -125,7 +129,11 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.use('/flex-parts', flexPartsRouter(flexPartsService));
   api.use(datasheetsRouter(datasheetsService, options.uploadsDir));
   const currencyRates = new CurrencyRatesService(new CurrencyRatesRepository(dataSource), shopSettings);
-  api.use(jobsRouter(new JobsService(new JobsStore(dataSource), new RunResults(catalogueService, flexPartsService, shopSettings, currencyRates))));
+  const jobsService = new JobsService(new JobsStore(dataSource), new RunResults(catalogueService, flexPartsService, shopSettings, currencyRates));
+  const weldRules = new WeldRulesService(new WeldRulesStore(dataSource));
+  api.use(jobsRouter(jobsService));
+  api.use(weldPlanRouter(new WeldPlanService(jobsService, catalogueService, flexPartsService, weldRules)));
+  api.use('/weld-rules', weldRulesRouter(weldRules));
   const quotes = new QuotesService(new QuotesStore(dataSource), new JobsStore(dataSource), catalogueService, shopSettings, usersRepository, options.mailer, currencyRates, deposits);
   api.use('/currency-rates', currencyRatesRouter(currencyRates));
   api.use('/settings', shopSettingsRouter(shopSettings));

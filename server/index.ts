@@ -39,7 +39,7 @@ async function main() {
     fakePayments?.setWebhookTarget(`http://127.0.0.1:${config.port}/api/payments/webhook`);
     console.log(
       `[dilato] listening on http://localhost:${config.port} (data in ${config.dataDir}; ` +
-        `seeded: ${report.alloys} alloys, ${report.sources} sources, ${report.flexParts} flex parts, ${report.demoUsers} demo users, ${report.demoJobs ?? 0} demo jobs; ready in ${Date.now() - startedAt} ms)` +
+        `seeded: ${report.alloys} alloys, ${report.sources} sources, ${report.flexParts} flex parts, ${report.weldRules} weld rules, ${report.demoUsers} demo users, ${report.demoJobs ?? 0} demo jobs; ready in ${Date.now() - startedAt} ms)` +
         (fakePayments ? `; payments: the embedded fake provider at ${fakePayments.url}` : ''),
     );
   });

@@ -16,6 +16,8 @@ const run: RunFields = {
   joint: { type: 'none' },
   supports: [],
   nearby: [],
+  startFlangeAlloyId: null,
+  endFlangeAlloyId: null,
   notes: '',
 };
 

@@ -32,7 +32,7 @@ export function routeList(app: Express): string[] {
 }
 
 export interface RouteFixtures {
-  ids: Record<'alloy' | 'job' | 'run' | 'quote' | 'outbox' | 'datasheet' | 'import' | 'user' | 'flex', string>;
+  ids: Record<'alloy' | 'job' | 'run' | 'quote' | 'outbox' | 'datasheet' | 'import' | 'user' | 'flex' | 'weldRule' | 'weldRuleToDelete', string>;
   /** The customer link token of a sent quote. */
   token: string;
 }
@@ -54,7 +54,8 @@ export async function routeFixtures(t: TestApp): Promise<RouteFixtures> {
   const imported = await importCsv(eng, (await eng.get('/api/alloys/export.csv')).text);
   const user = (await admin.get('/api/users')).body.items.find((u: { role: string }) => u.role === 'fabricator').id;
   const flex = (await admin.get('/api/flex-parts')).body.items[0].id;
-  return { ids: { alloy, job: job.id, run: run.id, quote: draft.id, outbox, datasheet: sheet.body.datasheet.id, import: imported.id, user, flex }, token };
+  const [weldRule, weldRuleToDelete] = (await admin.get('/api/weld-rules')).body.items.map((r: { id: string }) => r.id);
+  return { ids: { alloy, job: job.id, run: run.id, quote: draft.id, outbox, datasheet: sheet.body.datasheet.id, import: imported.id, user, flex, weldRule, weldRuleToDelete }, token };
 }
 
 /** The route's path with real ids (or a made-up token when `badToken`). */
@@ -69,7 +70,8 @@ export function routeUrl(route: string, { ids, token }: RouteFixtures, badToken 
   };
   const prefix = path.split('/:')[0];
   const id =
-    byPath[path] ?? (prefix.startsWith('/api/alloys') ? ids.alloy : prefix.startsWith('/api/jobs') ? ids.job : prefix.startsWith('/api/runs') ? ids.run : ids.quote);
+    byPath[path] ??
+    (prefix.startsWith('/api/weld-rules') ? (route.startsWith('DELETE') ? ids.weldRuleToDelete : ids.weldRule) : undefined) ?? (prefix.startsWith('/api/alloys') ? ids.alloy : prefix.startsWith('/api/jobs') ? ids.job : prefix.startsWith('/api/runs') ? ids.run : ids.quote);
   return path
     .replace(':token', badToken ? 'A'.repeat(43) : token)
     .replace(':version', '1')

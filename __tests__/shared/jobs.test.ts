@@ -16,6 +16,8 @@ const fields = (over: Partial<RunFields> = {}): RunFields => ({
   joint: { type: 'none' },
   supports: [],
   nearby: [],
+  startFlangeAlloyId: null,
+  endFlangeAlloyId: null,
   notes: '',
   ...over,
 });

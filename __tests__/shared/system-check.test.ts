@@ -24,6 +24,8 @@ function run(over: Partial<RunFields>): RunView {
     joint: { type: 'none' },
     supports: [],
     nearby: [],
+    startFlangeAlloyId: null,
+    endFlangeAlloyId: null,
     notes: '',
     ...over,
   };

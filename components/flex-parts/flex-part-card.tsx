@@ -77,6 +77,7 @@ export function FlexPartCard({ part, units, onUpdate }: FlexPartCardProps) {
           <Fact label="Mean diameter" value={part.meanDiameterMm === null ? 'Not given (estimated)' : mm(part.meanDiameterMm)} />
           <Fact label="Overall length" value={mm(part.overallLengthMm ?? part.liveLengthMm)} />
           <Fact label="Maximum temperature" value={formatTemp(part.maxTempC, units)} />
+          <Fact label="Cuff alloy" value={part.cuffUns ? `UNS ${part.cuffUns}` : 'Not stated'} />
           <Fact label="Price" value={`${part.price.toFixed(2)} ${part.currency}`} />
         </View>
       )}

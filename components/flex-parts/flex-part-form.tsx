@@ -50,6 +50,7 @@ export const EMPTY_FLEX_PART: Draft = {
   maxTempC: Number.NaN,
   price: Number.NaN,
   currency: 'EUR',
+  cuffUns: null,
   active: true,
 };
 
@@ -112,6 +113,22 @@ export function FlexPartForm({ defaultValues, submitLabel, onSubmit, onCancel, c
             value={field.value}
             onChange={field.onChange}
             error={errors.purpose?.message}
+          />
+        )}
+      />
+      <Controller
+        control={control}
+        name="cuffUns"
+        render={({ field }) => (
+          <TextField
+            ref={field.ref}
+            label={`Cuff alloy (UNS)${suffix}`}
+            value={field.value ?? ''}
+            onChangeText={(t) => field.onChange(t.trim() ? t : null)}
+            onBlur={field.onBlur}
+            error={errors.cuffUns?.message}
+            hint="The weld cuffs' alloy from the maker's drawing, e.g. S32100; empty: not stated (the weld plan then names no filler for the cuffs)"
+            autoCapitalize="characters"
           />
         )}
       />

@@ -9,6 +9,7 @@ import { show, showMoney } from '../units/format';
 import { runLength, runPeak } from './run-card';
 import { runVerdicts } from './run-verdict';
 import { SystemSection } from './system-section';
+import { WeldPlanSection } from '../welds/weld-plan-section';
 import { cutLengths } from '../../shared/jobs/cut-lengths';
 import { stressFigure } from '../../shared/jobs/stress-figure';
 import { presetWords } from '../runs/flex-section';
@@ -106,6 +107,7 @@ export function JobSheet({ job, units }: { job: JobDetail; units: UnitSystem }) 
         <SheetRun key={run.id} run={run} units={units} />
       ))}
       <SystemSection job={job} units={units} />
+      {job.runs.length > 0 ? <WeldPlanSection jobId={job.id} /> : null}
       <CautionsNote />
     </View>
   );

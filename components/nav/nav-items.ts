@@ -17,6 +17,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Catalogue', href: '/alloys', segment: 'alloys' },
   { label: 'Flex parts', href: '/flex-parts', segment: 'flex-parts' },
   { label: 'Quotes', href: '/quotes', segment: 'quotes' },
+  { label: 'Weld rules', href: '/weld-rules', segment: 'weld-rules', roles: ['engineer', 'admin'] },
   { label: 'Outbox', href: '/outbox', segment: 'outbox', roles: ['admin', 'sales'] },
   { label: 'Shop settings', href: '/shop-settings', segment: 'shop-settings', roles: ['admin'] },
   { label: 'Currency rates', href: '/currency-rates', segment: 'currency-rates', roles: ['admin'] },

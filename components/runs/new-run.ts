@@ -19,6 +19,8 @@ export function newRunFields(runs: RunView[]): RunFields {
     segments: [{ lengthMm: 500, startTempC: startC, endTempC: startC }],
     startFixing: last?.endFixing ?? 'flange',
     endFixing: 'flange',
+    startFlangeAlloyId: null,
+    endFlangeAlloyId: null,
     joint: { type: 'none' },
     supports: [],
     nearby: [],

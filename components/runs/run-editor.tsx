@@ -16,6 +16,7 @@ import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { UnitNumberField } from '../units/unit-number-field';
 import { AlloyPicker } from './alloy-picker';
+import { FlangeFields } from './flange-fields';
 import { NearbyField } from './nearby-field';
 import { SupportsField } from './supports-field';
 import { flattenErrors, mergeMessages, type FieldMessages } from './field-errors';
@@ -134,6 +135,7 @@ export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabe
             <ChoicePicker label="End held by" choices={FIXING_CHOICES} value={value} onChange={onChange} error={messages.endFixing} disabled={!editable} />
           )}
         />
+        <FlangeFields control={control} values={values} units={units} errors={messages} disabled={!editable} />
         <Controller
           control={control}
           name="joint"

@@ -178,6 +178,11 @@ export class CatalogueService {
     return { alloyId: id, published: detail.published, draft: detail.draft, diff: diffAlloy(stripMeta(detail.published), stripMeta(detail.draft)!) };
   }
 
+  /** The id of the catalogue's alloy with this UNS number, retired ones included; null when there is none. */
+  async alloyIdByUns(uns: string): Promise<string | null> {
+    return (await this.store.read().findAlloyByUns(uns))?.id ?? null;
+  }
+
   async publishedAlloy(id: string): Promise<PublishedAlloy> {
     const repo = this.store.read();
     const alloy = await repo.findAlloy(id);

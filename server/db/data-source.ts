@@ -24,6 +24,10 @@ import { CurrencyRates1764600510000 } from './migrations/1764600510000-currency-
 import { CurrencyRate } from '../currency/currency-rate.entity';
 import { Deposit, PaymentEventSeen } from '../payments/deposit.entities';
 import { QuoteDeposits1764600900000 } from './migrations/1764600900000-quote-deposits';
+import { WeldRuleRevision, WeldRuleRow } from '../welds/weld-rule.entities';
+import { WeldRules1764601200000 } from './migrations/1764601200000-weld-rules';
+import { RunFlangeAlloys1764601210000 } from './migrations/1764601210000-run-flange-alloys';
+import { FlexPartCuff1764601220000 } from './migrations/1764601220000-flex-part-cuff';
 
 export const ENTITIES = [
   User,
@@ -46,6 +50,8 @@ export const ENTITIES = [
   ActivityEntry,
   Deposit,
   PaymentEventSeen,
+  WeldRuleRow,
+  WeldRuleRevision,
 ];
 export const MIGRATIONS = [
   UsersAndSessions1764600000000,
@@ -60,6 +66,9 @@ export const MIGRATIONS = [
   Activity1764600610000,
   RunSupportsAndNearby1764600700000,
   QuoteDeposits1764600900000,
+  WeldRules1764601200000,
+  RunFlangeAlloys1764601210000,
+  FlexPartCuff1764601220000,
 ];
 
 /** `database` is a file path, or ':memory:' for tests. */

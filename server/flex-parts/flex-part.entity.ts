@@ -19,6 +19,7 @@ export class FlexPartRow {
   @Column('real', { name: 'max_temp_c' }) maxTempC: number;
   @Column('real') price: number;
   @Column('varchar') currency: string;
+  @Column('varchar', { name: 'cuff_uns', nullable: true }) cuffUns: string | null;
   @Column('boolean', { default: true }) active: boolean;
   @Column('boolean', { name: 'is_demo', default: false }) isDemo: boolean;
   @CreateDateColumn({ name: 'created_at', type: 'datetime' }) createdAt: Date;

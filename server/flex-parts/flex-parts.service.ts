@@ -24,6 +24,7 @@ function view(row: FlexPartRow): FlexPartView {
     maxTempC: row.maxTempC,
     price: row.price,
     currency: row.currency,
+    cuffUns: row.cuffUns ?? null,
     active: Boolean(row.active),
     isDemo: Boolean(row.isDemo),
   };

@@ -32,6 +32,8 @@ export class JobRun {
   @Column('simple-json') segments: Segment[];
   @Column('varchar', { name: 'start_fixing' }) startFixing: FixedPointId;
   @Column('varchar', { name: 'end_fixing' }) endFixing: FixedPointId;
+  @Column('varchar', { name: 'start_flange_alloy_id', nullable: true }) startFlangeAlloyId: string | null;
+  @Column('varchar', { name: 'end_flange_alloy_id', nullable: true }) endFlangeAlloyId: string | null;
   @Column('simple-json') joint: Joint;
   @Column('simple-json', { default: '[]' }) supports: Support[];
   @Column('simple-json', { default: '[]' }) nearby: NearbyItem[];

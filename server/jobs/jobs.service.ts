@@ -198,6 +198,10 @@ export class JobsService {
   private async checkAlloys(session: ResultSession, fields: Partial<RunFields>): Promise<void> {
     const named: [string, string][] = [];
     if (fields.alloyId !== undefined) named.push(['alloyId', fields.alloyId]);
+    for (const end of ['startFlangeAlloyId', 'endFlangeAlloyId'] as const) {
+      const id = fields[end];
+      if (id) named.push([end, id]);
+    }
     if (fields.joint?.type === 'slip') {
       for (const side of ['inner', 'outer'] as const) {
         const id = fields.joint[side].alloyId;
@@ -317,6 +321,8 @@ function applyFields(run: JobRun, fields: RunFields, now: Date): JobRun {
     segments: fields.segments.map((s) => ({ lengthMm: s.lengthMm, startTempC: s.startTempC, endTempC: s.endTempC })),
     startFixing: fields.startFixing,
     endFixing: fields.endFixing,
+    startFlangeAlloyId: fields.startFlangeAlloyId,
+    endFlangeAlloyId: fields.endFlangeAlloyId,
     joint: fields.joint,
     supports: fields.supports,
     nearby: fields.nearby,

@@ -11,6 +11,8 @@ export function runFieldsOf(run: JobRun): RunFields {
     segments: run.segments,
     startFixing: run.startFixing,
     endFixing: run.endFixing,
+    startFlangeAlloyId: run.startFlangeAlloyId ?? null,
+    endFlangeAlloyId: run.endFlangeAlloyId ?? null,
     joint: run.joint,
     supports: run.supports ?? [],
     nearby: run.nearby ?? [],

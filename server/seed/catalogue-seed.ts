@@ -94,6 +94,7 @@ export async function seedFlexParts(dataSource: DataSource): Promise<number> {
       const { purpose, overallLengthMm, meanDiameterMm, ratedAngularDeg, ratedCycles } = input;
       await service.update(found.id, { purpose, overallLengthMm, meanDiameterMm, ratedAngularDeg, ratedCycles });
     }
+    if (found?.isDemo && found.cuffUns === null && input.cuffUns !== null) await service.update(found.id, { cuffUns: input.cuffUns });
   }
   return added;
 }

@@ -17,7 +17,10 @@ const TUBE_76 = { odMm: 76.2, wallMm: 1.651 };
 /** 6 in × 14 ga (0.083 in) for the dryer's hot-air duct. */
 const TUBE_152 = { odMm: 152.4, wallMm: 2.108 };
 
-type DemoRun = Omit<RunCreateInput, 'alloyId' | 'installTempC' | 'joint' | 'notes' | 'supports' | 'nearby'> & {
+type DemoRun = Omit<RunCreateInput, 'alloyId' | 'installTempC' | 'joint' | 'notes' | 'supports' | 'nearby' | 'startFlangeAlloyId' | 'endFlangeAlloyId'> & {
+  /** What the end flanges are made of, by UNS; absent = the run's own alloy. */
+  startFlangeUns?: string;
+  endFlangeUns?: string;
   supports?: RunCreateInput['supports'];
   nearby?: RunCreateInput['nearby'];
   uns: string;
@@ -65,6 +68,8 @@ export const DEMO_JOBS: DemoJob[] = [
         ],
         startFixing: 'turbo_outlet',
         endFixing: 'v_band',
+        startFlangeUns: 'G10200',
+        endFlangeUns: 'S30400',
         joint: { type: 'flex', atMm: 300, lateralOffsetMm: 1.5, heatCycles: 5000 },
         supports: [
           { kind: 'sliding', atMm: 180 },
@@ -119,6 +124,7 @@ export const DEMO_JOBS: DemoJob[] = [
         segments: [{ lengthMm: 320, startTempC: 780, endTempC: 740 }],
         startFixing: 'turbo_outlet',
         endFixing: 'flex_section',
+        startFlangeUns: 'G10200',
         joint: { type: 'flex', atMm: 320 },
         supports: [{ kind: 'hanger', atMm: 250 }],
       },
@@ -147,6 +153,7 @@ export const DEMO_JOBS: DemoJob[] = [
         segments: [{ lengthMm: 3000, startTempC: 480, endTempC: 450 }],
         startFixing: 'equipment_nozzle',
         endFixing: 'slip_joint',
+        startFlangeUns: 'G10200',
         supports: [
           { kind: 'hanger', atMm: 1000 },
           { kind: 'hanger', atMm: 2000 },
@@ -172,6 +179,7 @@ export const DEMO_JOBS: DemoJob[] = [
         segments: [{ lengthMm: 2400, startTempC: 450, endTempC: 420 }],
         startFixing: 'slip_joint',
         endFixing: 'equipment_nozzle',
+        endFlangeUns: 'G10200',
         supports: [
           { kind: 'sliding', atMm: 120 },
           { kind: 'hanger', atMm: 1200 },
@@ -193,13 +201,16 @@ export async function seedDemoJobs(dataSource: DataSource): Promise<number> {
   let added = 0;
   for (const demo of DEMO_JOBS) {
     if (await store.read().findJobByName(demo.name)) continue;
-    const alloyIds = await Promise.all(demo.runs.map(async (r) => (await catalogueStore.read().findAlloyByUns(r.uns))?.id));
+    const idOf = async (uns: string | undefined) => (uns === undefined ? null : ((await catalogueStore.read().findAlloyByUns(uns))?.id ?? undefined));
+    const alloyIds = await Promise.all(demo.runs.map((r) => idOf(r.uns)));
+    const flangeIds = await Promise.all(demo.runs.map(async (r) => [await idOf(r.startFlangeUns), await idOf(r.endFlangeUns)] as const));
     // Without the reference catalogue (SEED_CATALOGUE=false) the demo alloys are not there to build with.
-    if (alloyIds.some((id) => id === undefined)) continue;
+    if ([...alloyIds, ...flangeIds.flat()].some((id) => id === undefined)) continue;
     const { runs, ...fields } = demo;
     const job = await jobs.createJob(jobCreateSchema.parse(fields), toPublicUser(fabricator));
-    for (const [i, { uns: _uns, ...run }] of runs.entries()) {
-      await jobs.createRun(job.id, runCreateSchema.parse({ ...run, alloyId: alloyIds[i] }));
+    for (const [i, { uns: _uns, startFlangeUns: _s, endFlangeUns: _e, ...run }] of runs.entries()) {
+      const [startFlangeAlloyId, endFlangeAlloyId] = flangeIds[i];
+      await jobs.createRun(job.id, runCreateSchema.parse({ ...run, alloyId: alloyIds[i], startFlangeAlloyId, endFlangeAlloyId }));
     }
     added += 1;
   }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { unsSchema } from './weld-rules';
 import { FLEX_PURPOSES } from '../engine/flex-purposes';
 
 export const ALLOY_FAMILIES = [
@@ -157,6 +158,8 @@ export const flexPartInputSchema = z.object({
   maxTempC: tempC,
   price: finite('Price').min(0, { error: 'Price cannot be negative' }),
   currency: z.string().trim().toUpperCase().regex(/^[A-Z]{3}$/, { error: 'Use a three-letter currency code' }),
+  /** UNS number of the weld cuffs, where the maker states it (the weld plan pairs the tube with it). */
+  cuffUns: unsSchema.nullable().default(null),
   active: z.boolean().default(true),
 });
 export type FlexPartInput = z.infer<typeof flexPartInputSchema>;

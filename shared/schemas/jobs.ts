@@ -100,6 +100,8 @@ export const nearbyItemSchema = z.object({
 });
 export type NearbyItem = z.infer<typeof nearbyItemSchema>;
 
+const flangeAlloy = z.string({ error: 'Choose an alloy' }).min(1, { error: 'Choose an alloy' }).nullable();
+
 const runFieldsShape = {
   name: text('a run name', 120),
   alloyId: z.string({ error: 'Choose an alloy' }).min(1, { error: 'Choose an alloy' }),
@@ -111,6 +113,9 @@ const runFieldsShape = {
     .max(50, { error: 'Use at most 50 segments' }),
   startFixing: fixedPointSchema,
   endFixing: fixedPointSchema,
+  /** What the flange at a flanged end is made of (the weld plan pairs it with the tube); null = the run's own alloy. */
+  startFlangeAlloyId: flangeAlloy,
+  endFlangeAlloyId: flangeAlloy,
   joint: jointSchema,
   supports: z.array(supportSchema).max(50, { error: 'Use at most 50 supports' }),
   nearby: z.array(nearbyItemSchema).max(50, { error: 'Use at most 50 nearby items' }),
@@ -146,6 +151,8 @@ export const runCreateSchema = z
     installTempC: runFieldsShape.installTempC.default(20),
     startFixing: fixedPointSchema.default('flange'),
     endFixing: fixedPointSchema.default('flange'),
+    startFlangeAlloyId: flangeAlloy.default(null),
+    endFlangeAlloyId: flangeAlloy.default(null),
     joint: jointSchema.default({ type: 'none' }),
     supports: runFieldsShape.supports.default([]),
     nearby: runFieldsShape.nearby.default([]),

@@ -7,6 +7,7 @@ import { JobTotalsCard } from '../../../../components/jobs/job-totals';
 import { canEditJobs } from '../../../../components/jobs/roles';
 import { RunCard } from '../../../../components/jobs/run-card';
 import { SystemSection } from '../../../../components/jobs/system-section';
+import { WeldPlanSection } from '../../../../components/welds/weld-plan-section';
 import { ActivitySection } from '../../../../components/ui/activity-list';
 import { Button } from '../../../../components/ui/button';
 import { EmptyState } from '../../../../components/ui/empty-state';
@@ -107,6 +108,7 @@ export default function JobScreen() {
         )}
       </View>
       <SystemSection job={detail} units={units} />
+      {detail.runs.length > 0 ? <WeldPlanSection jobId={detail.id} /> : null}
       <ActivitySection intro="Who changed what on this job and its runs, deleted runs included." query={activity} />
       <UnitSwitch />
     </Screen>
