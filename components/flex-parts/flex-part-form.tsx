@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, type FieldPath, useForm } from 'react-hook-form';
+import { Controller, type FieldPath } from 'react-hook-form';
 import type { z } from 'zod';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
@@ -13,6 +13,7 @@ import { placeServerErrors } from '../ui/server-errors';
 import { Button } from '../ui/button';
 import { ErrorBanner } from '../ui/error-banner';
 import { TextField } from '../ui/text-field';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 /** What the form holds: the schema's input, where `active` may be left out. */
 type Draft = z.input<typeof flexPartInputSchema>;
@@ -64,7 +65,7 @@ export interface FlexPartFormProps {
 
 export function FlexPartForm({ defaultValues, submitLabel, onSubmit, onCancel, context }: FlexPartFormProps) {
   const [failure, setFailure] = useState<string>();
-  const { control, handleSubmit, setError, reset, formState: { errors, isSubmitting } } = useForm<Draft, unknown, FlexPartInput>({
+  const { control, handleSubmit, setError, reset, formState: { errors, isSubmitting } } = useCheckedForm<Draft, unknown, FlexPartInput>({
     resolver: zodResolver(flexPartInputSchema),
     defaultValues,
   });

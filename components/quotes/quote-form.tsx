@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useMemo, useState } from 'react';
-import { Controller, useFieldArray, useForm, useWatch } from 'react-hook-form';
+import { Controller, useFieldArray, useWatch } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { layout, spacing } from '../../constants/theme';
 import { useJobQuery } from '../../hooks/use-jobs';
@@ -18,6 +18,7 @@ import { LivePricingPanel } from './live-pricing-panel';
 import { OptionFields } from './option-fields';
 import { placeServerErrors } from '../ui/server-errors';
 import { FieldError } from '../ui/field-error';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 export const MIN_OPTIONS = 2;
 export const MAX_OPTIONS = 4;
@@ -46,7 +47,7 @@ export function QuoteForm({ jobs, alloys, defaultValues, submitLabel, onSubmit, 
     getValues,
     reset,
     formState: { errors, isSubmitting, isDirty },
-  } = useForm<QuoteInputDraft, unknown, QuoteInput>({ resolver: zodResolver(quoteInputSchema), defaultValues });
+  } = useCheckedForm<QuoteInputDraft, unknown, QuoteInput>({ resolver: zodResolver(quoteInputSchema), defaultValues });
   const { fields, append, remove } = useFieldArray({ control, name: 'options' });
   const jobId = useWatch({ control, name: 'jobId' });
   const job = useJobQuery(jobId || undefined);

@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import type { z } from 'zod';
-import { type Control, Controller, useForm } from 'react-hook-form';
+import { type Control, Controller } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import { ALLOY_FAMILIES, FAMILY_LABELS } from '../../shared/schemas/alloy';
@@ -14,6 +14,7 @@ import { Card } from '../ui/card';
 import { ErrorBanner } from '../ui/error-banner';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 type Values = z.input<typeof shopSettingsSchema>;
 type NumberPath = 'labourRatePerHour' | 'hoursPerRun' | 'scrapAllowancePct' | 'marginPct' | 'depositSharePct' | 'travelSharePct' | 'coldestStartC' | 'supportNearJointMm' | 'engineSupportMm' | `nearbyMinimumsMm.${NearbyKind}` | `weldTimeFactors.${(typeof ALLOY_FAMILIES)[number]}`;
@@ -45,7 +46,7 @@ export function ShopSettingsForm({ defaultValues, onSubmit }: ShopSettingsFormPr
     setError,
     reset,
     formState: { errors, isSubmitting },
-  } = useForm<Values, unknown, ShopSettings>({ resolver: zodResolver(shopSettingsSchema), defaultValues });
+  } = useCheckedForm<Values, unknown, ShopSettings>({ resolver: zodResolver(shopSettingsSchema), defaultValues });
 
   const submit = handleSubmit(async (values) => {
     setFailure(undefined);

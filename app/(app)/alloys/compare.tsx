@@ -14,6 +14,7 @@ import { Text } from '../../../components/ui/text';
 import { messageOf } from '../../../hooks/api-client';
 import { useAlloyQueries } from '../../../hooks/use-alloys';
 import { fromDisplay, toDisplay, unitLabel } from '../../../shared/units';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 const DEFAULT_AT_C = 800;
 
@@ -33,6 +34,7 @@ export default function CompareScreen() {
     return v ? [v] : [];
   });
 
+  useScreenTitle('Compare alloys', 'Alloy catalogue');
   return (
     <Screen wide>
       <TextLink href="/alloys" label="← Catalogue" accessibilityLabel="Back to the catalogue" />

@@ -17,6 +17,7 @@ import { layout, spacing } from '../../../constants/theme';
 import { messageOf } from '../../../hooks/api-client';
 import { CATALOGUE_CSV_URL, useAlloysQuery, useCsvImport } from '../../../hooks/use-alloys';
 import { useSessionQuery } from '../../../hooks/use-session';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function AlloyListScreen() {
   const router = useRouter();
@@ -34,6 +35,7 @@ export default function AlloyListScreen() {
     setSelected((ids) => (on ? (ids.includes(id) || ids.length >= MAX_COMPARE ? ids : [...ids, id]) : ids.filter((x) => x !== id)));
   const full = selected.length >= MAX_COMPARE;
 
+  useScreenTitle('Alloy catalogue');
   return (
     <Screen wide>
       <View style={styles.header}>

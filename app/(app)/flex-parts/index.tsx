@@ -12,6 +12,7 @@ import { layout, spacing } from '../../../constants/theme';
 import { messageOf } from '../../../hooks/api-client';
 import { useCreateFlexPartMutation, useFlexPartsQuery, useUpdateFlexPartMutation } from '../../../hooks/use-flex-parts';
 import { useSessionQuery } from '../../../hooks/use-session';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function FlexPartsScreen() {
   const { data: me } = useSessionQuery();
@@ -21,6 +22,7 @@ export default function FlexPartsScreen() {
   const update = useUpdateFlexPartMutation();
   const twoColumns = useWindowDimensions().width >= layout.wideBreakpoint;
 
+  useScreenTitle('Flex parts');
   return (
     <Screen wide>
       <View style={styles.header}>

@@ -26,6 +26,7 @@ import { useAlloyQuery, useAlloyReviewQuery, useAlloyRevisionsQuery, useAlloySta
 import { useSessionQuery } from '../../../../hooks/use-session';
 import { useSourcesQuery } from '../../../../hooks/use-sources';
 import { useUploadDatasheetMutation } from '../../../../hooks/use-upload';
+import { useScreenTitle } from '../../../../components/ui/use-screen-title';
 
 type Shown = 'published' | 'draft';
 
@@ -43,6 +44,7 @@ export default function AlloyDetailScreen() {
   const allSources = useSourcesQuery();
   const [choice, setChoice] = useState<Shown>('published');
 
+  useScreenTitle(alloy.data ? `${alloy.data.published?.designation ?? alloy.data.draft?.designation ?? 'Alloy'}` : 'Alloy', 'Alloy catalogue');
   if (alloy.isPending) return <LoadingState label="Loading the alloy…" />;
   if (alloy.isError) {
     return (
