@@ -1,7 +1,7 @@
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { colors, layout, spacing } from '../../constants/theme';
 import type { AlloyVersionView } from '../../shared/schemas/alloy';
-import { toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
+import { growthBasisWords, toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
 import { LineChart } from '../charts/line-chart';
 import { Text } from '../ui/text';
 import { COLD_C, growthAt, growthCurve, maxDataC } from './curves';
@@ -38,7 +38,7 @@ export function CompareView({ alloys, atC, units }: CompareViewProps) {
   return (
     <View style={styles.wrapper}>
       <LineChart
-        title={`Growth per metre from ${formatTemp(COLD_C, units)}`}
+        title={`Growth ${growthBasisWords(units)} from ${formatTemp(COLD_C, units)}`}
         summary={alloys
           .map((v) => {
             const g = growthAt(v, atC);

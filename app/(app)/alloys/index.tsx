@@ -6,7 +6,7 @@ import { AlloyFilters, DEFAULT_FILTERS, toListParams } from '../../../components
 import { AlloyTable } from '../../../components/alloys/alloy-table';
 import { CompareBar, MAX_COMPARE } from '../../../components/alloys/compare-bar';
 import { CsvTools } from '../../../components/alloys/csv-tools';
-import { CATALOGUE_UNITS } from '../../../components/alloys/format';
+import { useUnits } from '../../../hooks/use-units';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorBanner } from '../../../components/ui/error-banner';
@@ -23,7 +23,7 @@ export default function AlloyListScreen() {
   const router = useRouter();
   const { data: me } = useSessionQuery();
   const canEdit = me?.role === 'engineer' || me?.role === 'admin';
-  const units = CATALOGUE_UNITS;
+  const units = useUnits();
   const [filters, setFilters] = useState(DEFAULT_FILTERS);
   const [selected, setSelected] = useState<string[]>([]);
   const { params, atC, atError, minServiceError } = toListParams(filters, units);

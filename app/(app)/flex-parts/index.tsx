@@ -1,5 +1,5 @@
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
-import { CATALOGUE_UNITS } from '../../../components/alloys/format';
+import { useUnits } from '../../../hooks/use-units';
 import { EMPTY_FLEX_PART, FlexPartForm } from '../../../components/flex-parts/flex-part-form';
 import { FlexPartCard } from '../../../components/flex-parts/flex-part-card';
 import { Card } from '../../../components/ui/card';
@@ -21,6 +21,7 @@ export default function FlexPartsScreen() {
   const create = useCreateFlexPartMutation();
   const update = useUpdateFlexPartMutation();
   const twoColumns = useWindowDimensions().width >= layout.wideBreakpoint;
+  const units = useUnits();
 
   useScreenTitle('Flex parts');
   return (
@@ -47,7 +48,7 @@ export default function FlexPartsScreen() {
               <FlexPartCard
                 key={part.id}
                 part={part}
-                units={CATALOGUE_UNITS}
+                units={units}
                 onUpdate={isAdmin ? (changes) => update.mutateAsync({ id: part.id, changes }) : undefined}
               />
             ))
