@@ -4,6 +4,8 @@ import { Controller, useFieldArray, useWatch } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { layout, spacing } from '../../constants/theme';
 import { useJobQuery } from '../../hooks/use-jobs';
+import { useUnits } from '../../hooks/use-units';
+import { formatQuantity } from '../../shared/units';
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import type { JobSummary } from '../../shared/schemas/jobs';
 import { quoteInputSchema, type QuoteInput, type QuoteInputDraft } from '../../shared/schemas/quotes';
@@ -52,11 +54,12 @@ export function QuoteForm({ jobs, alloys, defaultValues, submitLabel, onSubmit, 
   const jobId = useWatch({ control, name: 'jobId' });
   const job = useJobQuery(jobId || undefined);
 
+  const units = useUnits();
   const published = useMemo(() => alloys.filter((a) => a.status === 'published'), [alloys]);
   const priced = useMemo(() => pricedAlloys(published), [published]);
   const alloyChoices = useMemo(
-    () => published.map((a) => ({ value: a.id, label: `${a.designation} (${a.uns})`, hint: `Service to about ${Math.min(a.maxContinuousC, a.maxIntermittentC)} °C` })),
-    [published],
+    () => published.map((a) => ({ value: a.id, label: `${a.designation} (${a.uns})`, hint: `Service to about ${formatQuantity('temperature', Math.min(a.maxContinuousC, a.maxIntermittentC), units).text}` })),
+    [published, units],
   );
   const jobChoices = jobs.map((j) => ({ value: j.id, label: j.name, hint: `${j.customer} · ${j.runCount} run${j.runCount === 1 ? '' : 's'}` }));
   const runs = job.data?.runs.map((r) => ({ id: r.id, name: r.name })) ?? [];

@@ -7,6 +7,8 @@ import { AlloyTable } from '../../../components/alloys/alloy-table';
 import { CompareBar, MAX_COMPARE } from '../../../components/alloys/compare-bar';
 import { CsvTools } from '../../../components/alloys/csv-tools';
 import { useUnits } from '../../../hooks/use-units';
+import { formatTemp } from '../../../components/alloys/format';
+import { growthBasisWords } from '../../../shared/units';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorBanner } from '../../../components/ui/error-banner';
@@ -46,7 +48,7 @@ export default function AlloyListScreen() {
           {canEdit ? <Button label="New alloy" compact onPress={() => router.push('/alloys/new')} /> : null}
         </View>
         <Text tone="muted">
-          The shop’s tube alloys with the source behind every value. Growth is per metre of tube heated from 20 °C.
+          The shop’s tube alloys with the source behind every value. Growth is {growthBasisWords(units)} of tube heated from {formatTemp(20, units)}.
         </Text>
       </View>
 
