@@ -173,6 +173,8 @@ export interface Quantity {
   si: number;
   /** Decimals in both systems, where the default for the kind does not suit (a mass to 0.1 kg). */
   decimals?: number;
+  /** The number alone, its unit given by the next quantity: the 593 of "593 and 816 °C". */
+  bare?: boolean;
 }
 
 /** A message as text and quantities, e.g. ["Peak ", {temperature 850}, " is within ", …]. */
@@ -213,7 +215,13 @@ export function joinPhrases(list: readonly Phrase[], separator: string): Phrase 
 /** The words for a phrase in the reader's units: "Peak 1562 °F is within 90 °F of …". */
 export function wordPhrase(p: Phrase | string, system: UnitSystem): string {
   if (typeof p === 'string') return p;
-  return p.map((part) => (typeof part === 'string' ? part : formatQuantity(part.kind, part.si, system, part.decimals).text)).join('');
+  return p
+    .map((part) => {
+      if (typeof part === 'string') return part;
+      const f = formatQuantity(part.kind, part.si, system, part.decimals);
+      return part.bare ? String(f.value) : f.text;
+    })
+    .join('');
 }
 
 /** The number for an input box, at the trade's precision for the kind (0.1 mm / 0.01 in, 1 °C / 1 °F); the stored SI value stays exact. */
@@ -223,3 +231,26 @@ export function inputNumber(kind: QuantityKind, si: number, system: UnitSystem):
 
 /** What growth per length is per, in words for a title: "per metre" / "per 100 ft". */
 export const growthBasisWords = (system: UnitSystem): string => (system === 'metric' ? 'per metre' : 'per 100 ft');
+
+const WRITTEN_RANGE_C = /(-?\d+(?:\.\d+)?)(\s*(?:–|-|and|to)\s*)(-?\d+(?:\.\d+)?) ?°C|(-?\d+(?:\.\d+)?) ?°C/g;
+// Catalogue texts sometimes add the Fahrenheit figures by hand: "(700–950 °F)". Worded from the quantities, they would repeat.
+const WRITTEN_F_ASIDE = /\s*\((?:about )?-?\d+(?:\.\d+)?(?:\s*(?:–|-|to)\s*-?\d+(?:\.\d+)?)? ?°F\)/g;
+
+/**
+ * A text written in °C (a catalogue caution: "between 593 and 816 °C") as a phrase whose
+ * temperatures are quantities, so it reads in °F for an imperial reader. A range's first
+ * figure takes the unit of its second ("593 and 816 °C" is two temperatures, read "1099 and 1501 °F").
+ */
+export function phraseOfText(text: string): Phrase {
+  const parts: (string | Quantity)[] = [];
+  let last = 0;
+  const plain = text.replace(WRITTEN_F_ASIDE, '');
+  for (const m of plain.matchAll(WRITTEN_RANGE_C)) {
+    parts.push(plain.slice(last, m.index));
+    if (m[4] !== undefined) parts.push(quantity('temperature', Number(m[4])));
+    else parts.push({ ...quantity('temperature', Number(m[1])), bare: true }, m[2], quantity('temperature', Number(m[3])));
+    last = m.index! + m[0].length;
+  }
+  parts.push(plain.slice(last));
+  return parts.filter((p) => p !== '');
+}

@@ -12,6 +12,7 @@ import {
   inputNumber,
   joinPhrases,
   phrase,
+  phraseOfText,
   quantity,
   wordPhrase,
   inPer100FtToMmPerM,
@@ -202,5 +203,19 @@ describe('phrases: quantities worded in the reader’s units', () => {
     expect(growthBasisWords('metric')).toBe('per metre');
     expect(growthBasisWords('imperial')).toBe('per 100 ft');
     expect(unitLabel('growthPerLength', 'imperial')).toBe('in/100 ft');
+  });
+});
+
+describe('catalogue texts written in °C', () => {
+  it('when a caution names a range, then both ends become temperatures and a hand-written °F aside goes', () => {
+    const p = phraseOfText('475 °C embrittlement: held between about 371 and 510 °C (700–950 °F) it loses toughness.');
+    // 475 °C = 887 °F, 371 °C = 699.8 °F, 510 °C = 950 °F (NIST SP 811 §4.2.1.1)
+    expect(wordPhrase(p, 'imperial')).toBe('887 °F embrittlement: held between about 700 and 950 °F it loses toughness.');
+    expect(wordPhrase(p, 'metric')).toBe('475 °C embrittlement: held between about 371 and 510 °C it loses toughness.');
+  });
+
+  it('when a text has a dash range or no temperature, then it reads as written', () => {
+    expect(wordPhrase(phraseOfText('sigma phase at 593–816 °C'), 'imperial')).toBe('sigma phase at 1099–1501 °F');
+    expect(wordPhrase(phraseOfText('No temperature here.'), 'imperial')).toBe('No temperature here.');
   });
 });

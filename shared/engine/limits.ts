@@ -1,4 +1,4 @@
-import { phrase, quantity } from '../units';
+import { phrase, phraseOfText, quantity } from '../units';
 import type { AlloyData, EngineWarning, LimitResult, LimitStatus, Segment } from './types';
 
 /**
@@ -42,7 +42,7 @@ export function warningRangesHit(alloy: Pick<AlloyData, 'warningRanges'>, segmen
   const hits: EngineWarning[] = [];
   for (const w of alloy.warningRanges ?? []) {
     const touched = segments.some((s) => Math.max(s.startTempC, s.endTempC) >= w.fromC && Math.min(s.startTempC, s.endTempC) <= w.toC);
-    if (touched) hits.push({ code: w.code, message: [w.message] });
+    if (touched) hits.push({ code: w.code, message: phraseOfText(w.message) });
   }
   return hits;
 }
