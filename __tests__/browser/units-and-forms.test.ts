@@ -298,6 +298,11 @@ describe('signing in, at 390 px', () => {
     await page.waitForURL(/\/sign-in\?next=/);
     await page.getByRole('button', { name: 'Sign in', exact: true }).waitFor();
     await page.waitForFunction(() => document.title === 'Sign in · Dilato');
+    // The tab shows the app's own mark (assets/favicon.png, exported as favicon.ico).
+    expect(await page.locator('link[rel="icon"]').getAttribute('href')).toBe('/favicon.ico');
+    const icon = await context.request.get('/favicon.ico');
+    expect(icon.status()).toBe(200);
+    expect(icon.headers()['content-type']).toMatch(/^image\//);
     await page.getByLabel('Email', { exact: true }).fill('engineer@dilato.test');
     await page.getByLabel('Password', { exact: true }).fill('dilato-demo');
     await page.getByRole('button', { name: 'Sign in', exact: true }).click();

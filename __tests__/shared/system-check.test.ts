@@ -38,6 +38,9 @@ describe('stretches between held points', () => {
     const f = checkSystem([run({})], DEFAULT_SYSTEM_BASIS).findings.find((x) => x.code === 'STRETCH_WITHOUT_JOINT');
     expect(f?.severity).toBe('danger');
     expect(wordPhrase(f?.message ?? '', 'metric')).toContain(`${(1000 * enStainlessElongation(600)).toFixed(1)} mm of growth`);
+    // The same finding for an imperial reader: 1 in = 25.4 mm exactly (NIST SP 811 App. B).
+    expect(wordPhrase(f?.message ?? '', 'imperial')).toContain(`${((1000 * enStainlessElongation(600)) / 25.4).toFixed(2)} in of growth`);
+    expect(wordPhrase(f?.message ?? '', 'imperial')).not.toMatch(/ mm\b/);
   });
 
   it('when two runs meet at a sliding bracket between two flanges, then the whole stretch is flagged; a flex anywhere in it clears it', () => {
