@@ -109,7 +109,7 @@ export function assessFlexPart(part: FlexPart, duty: FlexDuty): FlexCandidateRes
   }
   const lateralUse = shareOf(lateral, part.lateralOffsetMm);
   const angularUse = shareOf(rotation, part.ratedAngularDeg);
-  if (lateralUse > share) reasons.push(phrase`Lateral offset ${move(lateral)} is ${pct(lateralUse)} of its ${move(part.lateralOffsetMm)} rating (at most ${pct(share)})`);
+  if (lateralUse > share) reasons.push(phrase`Lateral offset ${len(lateral)} is ${pct(lateralUse)} of its ${len(part.lateralOffsetMm)} rating (at most ${pct(share)})`);
   if (angularUse > share) reasons.push(phrase`Rotation ${fmt(rotation)}° is ${pct(angularUse)} of its ${fmt(part.ratedAngularDeg)}° rating (at most ${pct(share)})`);
 
   const preset = choosePreset(hot.axialGrowthMm, presetRange(part, dm.mm, duty));
