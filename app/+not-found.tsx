@@ -3,8 +3,10 @@ import { StyleSheet } from 'react-native';
 import { Screen } from '../components/ui/screen';
 import { Text } from '../components/ui/text';
 import { colors, spacing, typography } from '../constants/theme';
+import { useScreenTitle } from '../components/ui/use-screen-title';
 
 export default function NotFoundScreen() {
+  useScreenTitle('Page not found');
   return (
     <Screen narrow>
       <Text variant="title" headingLevel={1}>

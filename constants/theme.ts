@@ -138,6 +138,8 @@ export type TypeVariant = keyof typeof typography;
 export const layout = {
   /** Width at which the bottom tab bar gives way to a side rail. */
   wideBreakpoint: 1024,
+  /** Below this width tables with several columns become stacked cards (phones). */
+  phoneMaxWidth: 600,
   railWidth: 232,
   contentMaxWidth: 880,
   wideContentMaxWidth: 1200,

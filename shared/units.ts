@@ -4,14 +4,25 @@ import convert from 'convert-units';
 
 export type UnitSystem = 'metric' | 'imperial';
 
-export const mmToIn = (mm: number): number => convert(mm).from('mm').to('in');
-export const inToMm = (inch: number): number => convert(inch).from('in').to('mm');
+/*
+ * Exact factors from NIST SP 811 Appendix B: 1 in = 25.4 mm, 1 lb = 0.45359237 kg (both exact
+ * by definition), 1 psi = 6894.757 Pa. convert-units bridges metric and imperial through rounded
+ * anchors (3.28084 ft/m, 453.592 g/lb: 2 in → 50.79999837 mm), which would store 50.79999837 for
+ * a typed 2 in; it keeps the temperature scales (°F = °C × 9/5 + 32, exact) and the steps inside
+ * one system (ft ↔ in).
+ */
+const MM_PER_IN = 25.4;
+const KG_PER_LB = 0.45359237;
+const MPA_PER_KSI = 6.894757;
+
+export const mmToIn = (mm: number): number => mm / MM_PER_IN;
+export const inToMm = (inch: number): number => inch * MM_PER_IN;
 export const cToF = (c: number): number => convert(c).from('C').to('F');
 export const fToC = (f: number): number => convert(f).from('F').to('C');
-export const kgToLb = (kg: number): number => convert(kg).from('kg').to('lb');
-export const lbToKg = (lb: number): number => convert(lb).from('lb').to('kg');
-export const mpaToKsi = (mpa: number): number => convert(mpa).from('MPa').to('ksi');
-export const ksiToMpa = (ksi: number): number => convert(ksi).from('ksi').to('MPa');
+export const kgToLb = (kg: number): number => kg / KG_PER_LB;
+export const lbToKg = (lb: number): number => lb * KG_PER_LB;
+export const mpaToKsi = (mpa: number): number => mpa / MPA_PER_KSI;
+export const ksiToMpa = (ksi: number): number => ksi * MPA_PER_KSI;
 
 /**
  * Temperature differences scale by 9/5 with no offset: a rise of 100 °C is a rise of 180 °F.
@@ -26,7 +37,7 @@ export const cteMetricToImperial = (perK: number): number => (perK * 5) / 9;
 export const cteImperialToMetric = (perF: number): number => (perF * 9) / 5;
 
 /** Growth per length: mm per metre ↔ inches per 100 ft (the unit of ASME B31.3 Appendix C). */
-const IN_PER_100FT_IN_MM_PER_M = inToMm(1) / (convert(100).from('ft').to('m'));
+const IN_PER_100FT_IN_MM_PER_M = inToMm(1) / (inToMm(convert(100).from('ft').to('in')) / 1000);
 export const mmPerMToInPer100Ft = (mmPerM: number): number => mmPerM / IN_PER_100FT_IN_MM_PER_M;
 export const inPer100FtToMmPerM = (inPer100Ft: number): number => inPer100Ft * IN_PER_100FT_IN_MM_PER_M;
 
@@ -68,7 +79,8 @@ export function wallMmToGauge(wallMm: number, toleranceMm = 0.02): number | null
 
 export type QuantityKind =
   | 'length' // tube lengths, diameters
-  | 'smallLength' // growth, clearances, walls
+  | 'smallLength' // growth, walls, movements
+  | 'fit' // radial clearances and tolerances of a slip fit
   | 'temperature'
   | 'temperatureDelta'
   | 'mass'
@@ -92,6 +104,10 @@ const DISPLAY: Record<QuantityKind, Record<UnitSystem, Display>> = {
   smallLength: {
     metric: { unit: 'mm', decimals: 2, fromSi: same, toSi: same },
     imperial: { unit: 'in', decimals: 3, fromSi: mmToIn, toSi: inToMm },
+  },
+  fit: {
+    metric: { unit: 'mm', decimals: 3, fromSi: same, toSi: same },
+    imperial: { unit: 'in', decimals: 4, fromSi: mmToIn, toSi: inToMm },
   },
   temperature: {
     metric: { unit: '°C', decimals: 0, fromSi: same, toSi: same },
@@ -149,4 +165,92 @@ export function formatQuantity(
   const value = Math.round(shown * factor) / factor + 0;
   const text = Number.isFinite(value) ? `${value.toFixed(decimals)} ${d.unit}` : `— ${d.unit}`;
   return { value, unit: d.unit, text };
+}
+
+/** A measured value inside a message: worded in the reader's units only when shown. */
+export interface Quantity {
+  kind: QuantityKind;
+  si: number;
+  /** Decimals in both systems, where the default for the kind does not suit (a mass to 0.1 kg). */
+  decimals?: number;
+  /** The number alone, its unit given by the next quantity: the 593 of "593 and 816 °C". */
+  bare?: boolean;
+}
+
+/** A message as text and quantities, e.g. ["Peak ", {temperature 850}, " is within ", …]. */
+export type Phrase = readonly (string | Quantity)[];
+
+export const quantity = (kind: QuantityKind, si: number, decimals?: number): Quantity =>
+  decimals === undefined ? { kind, si } : { kind, si, decimals };
+
+const isQuantity = (part: unknown): part is Quantity =>
+  typeof part === 'object' && part !== null && 'kind' in part && 'si' in part;
+
+/**
+ * Builds a phrase from a template: phrase`Peak ${quantity('temperature', 850)} is over`.
+ * Plain strings and numbers join the words; quantities stay values until `wordPhrase`.
+ */
+export function phrase(strings: TemplateStringsArray, ...values: (string | number | Quantity | Phrase)[]): Phrase {
+  const parts: (string | Quantity)[] = [];
+  const push = (part: string | Quantity) => {
+    const last = parts[parts.length - 1];
+    if (typeof part === 'string' && typeof last === 'string') parts[parts.length - 1] = last + part;
+    else if (part !== '') parts.push(part);
+  };
+  strings.forEach((text, i) => {
+    push(text);
+    if (i >= values.length) return;
+    const v = values[i];
+    if (Array.isArray(v)) v.forEach(push);
+    else push(isQuantity(v) ? v : String(v));
+  });
+  return parts;
+}
+
+/** Joins phrases with a separator ("; "), keeping their quantities. */
+export function joinPhrases(list: readonly Phrase[], separator: string): Phrase {
+  return list.flatMap((p, i) => (i === 0 ? [...p] : [separator, ...p]));
+}
+
+/** The words for a phrase in the reader's units: "Peak 1562 °F is within 90 °F of …". */
+export function wordPhrase(p: Phrase | string, system: UnitSystem): string {
+  if (typeof p === 'string') return p;
+  return p
+    .map((part) => {
+      if (typeof part === 'string') return part;
+      const f = formatQuantity(part.kind, part.si, system, part.decimals);
+      return part.bare ? String(f.value) : f.text;
+    })
+    .join('');
+}
+
+/** The number for an input box, at the trade's precision for the kind (0.1 mm / 0.01 in, 1 °C / 1 °F); the stored SI value stays exact. */
+export function inputNumber(kind: QuantityKind, si: number, system: UnitSystem): number {
+  return formatQuantity(kind, si, system).value;
+}
+
+/** What growth per length is per, in words for a title: "per metre" / "per 100 ft". */
+export const growthBasisWords = (system: UnitSystem): string => (system === 'metric' ? 'per metre' : 'per 100 ft');
+
+const WRITTEN_RANGE_C = /(-?\d+(?:\.\d+)?)(\s*(?:–|-|and|to)\s*)(-?\d+(?:\.\d+)?) ?°C|(-?\d+(?:\.\d+)?) ?°C/g;
+// Catalogue texts sometimes add the Fahrenheit figures by hand: "(700–950 °F)". Worded from the quantities, they would repeat.
+const WRITTEN_F_ASIDE = /\s*\((?:about )?-?\d+(?:\.\d+)?(?:\s*(?:–|-|to)\s*-?\d+(?:\.\d+)?)? ?°F\)/g;
+
+/**
+ * A text written in °C (a catalogue caution: "between 593 and 816 °C") as a phrase whose
+ * temperatures are quantities, so it reads in °F for an imperial reader. A range's first
+ * figure takes the unit of its second ("593 and 816 °C" is two temperatures, read "1099 and 1501 °F").
+ */
+export function phraseOfText(text: string): Phrase {
+  const parts: (string | Quantity)[] = [];
+  let last = 0;
+  const plain = text.replace(WRITTEN_F_ASIDE, '');
+  for (const m of plain.matchAll(WRITTEN_RANGE_C)) {
+    parts.push(plain.slice(last, m.index));
+    if (m[4] !== undefined) parts.push(quantity('temperature', Number(m[4])));
+    else parts.push({ ...quantity('temperature', Number(m[1])), bare: true }, m[2], quantity('temperature', Number(m[3])));
+    last = m.index! + m[0].length;
+  }
+  parts.push(plain.slice(last));
+  return parts.filter((p) => p !== '');
 }

@@ -76,7 +76,7 @@ describe('joint design on a phone', () => {
     await results(page).getByText(/^None of the \d+ flex part\(s\) fits/).waitFor();
     await page.getByRole('button', { name: 'Flex part', exact: true }).click();
     await page.getByRole('radio', { name: /^DL-FX-63-250 / }).click();
-    await results(page).getByText('Lateral offset 6 mm is 75 % of its 8 mm rating (at most 70 %).', { exact: true }).waitFor();
+    await results(page).getByText('Lateral offset 6.0 mm is 75 % of its 8.0 mm rating (at most 70 %).', { exact: true }).waitFor();
     expect(await textOf(chosen.getByText(/^Does not fit: /))).toMatch(/your pick/);
     await shot('2-lateral-over');
     await page.getByLabel('Lateral offset when hot (mm)', { exact: true }).fill('4');
@@ -118,7 +118,7 @@ describe('joint design on a phone', () => {
     expect(tightest).toBeLessThan(nominal);
     expect(loosest).toBeLessThanOrEqual(0.25);
     await page.getByLabel('Cold clearance (mm)', { exact: true }).fill('0.25');
-    await checks.getByText(/^✗ Hot, the tightest fit keeps .* under the 0\.05 mm minimum: it may seize$/).waitFor();
+    await checks.getByText(/^✗ Hot, the tightest fit keeps .* under the 0\.050 mm minimum: it may seize$/).waitFor();
     await page.getByLabel('Cold clearance (mm)', { exact: true }).fill('0.45');
     await results(page).getByText('Slides and has room: every check passes.', { exact: true }).waitFor();
     await checks.scrollIntoViewIfNeeded();

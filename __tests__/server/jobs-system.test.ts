@@ -1,6 +1,7 @@
 import { DEMO_SHOP_SETTINGS } from '../../shared/schemas/shop-settings';
 import { alloyId, jobDetail, newJob, newRun, runBody } from './jobs-helpers';
 import { createTestApp, expectErrorShape, signedIn, type TestApp } from './test-app';
+import { wordPhrase } from '../../shared/units';
 
 let t: TestApp;
 let s321: string;
@@ -20,7 +21,7 @@ describe('the job as a system', () => {
     const detail = await jobDetail(fab, job.id);
     const f = detail.system.findings.find((x) => x.code === 'STRETCH_WITHOUT_JOINT');
     expect(f?.severity).toBe('danger');
-    expect(f?.message).toMatch(/held at both ends with no joint/);
+    expect(wordPhrase(f?.message ?? '', 'metric')).toMatch(/held at both ends with no joint/);
   });
 
   it('when a fuel line sits 20 mm from the hot end of a downpipe, then it is flagged as too close with the fire caution', async () => {
@@ -45,7 +46,7 @@ describe('the job as a system', () => {
     expect(item.minimumMm).toBe(150);
     expect(item.hotGapMm).toBeLessThan(20);
     expect(item.hotGapMm).toBeGreaterThan(19);
-    expect(detail.system.findings.find((x) => x.code === 'NEARBY_TOO_CLOSE')?.message).toMatch(/fire risk/);
+    expect(wordPhrase(detail.system.findings.find((x) => x.code === 'NEARBY_TOO_CLOSE')?.message ?? '', 'metric')).toMatch(/fire risk/);
   });
 
   it('when the shop lowers its fuel-line gap, then the same item passes', async () => {
@@ -77,7 +78,7 @@ describe('the job as a system', () => {
     expect(detail.runs.some((r) => r.supports.length > 0)).toBe(true);
     expect(detail.runs.some((r) => r.nearby.length > 0)).toBe(true);
     expect(detail.system.supports.some((s) => s.role === 'slide' && s.movementMm > 0)).toBe(true);
-    expect(detail.system.findings.some((f) => f.code === 'NEARBY_TOO_CLOSE' && /Rear brake line/.test(f.message))).toBe(true);
+    expect(detail.system.findings.some((f) => f.code === 'NEARBY_TOO_CLOSE' && /Rear brake line/.test(wordPhrase(f.message, 'metric')))).toBe(true);
     for (const j of jobs) expect((await jobDetail(fab, j.id)).runs.every((r) => Array.isArray(r.supports) && Array.isArray(r.nearby))).toBe(true);
   });
 });

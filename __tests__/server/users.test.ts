@@ -83,7 +83,13 @@ describe('an admin manages users', () => {
 
     expect((await sales.get('/api/auth/me')).body).toEqual({ user: null });
     const again = await client(t.app).post('/api/auth/sign-in').send({ email: 'sales@dilato.test', password: 'dilato-demo' });
-    expect(again.status).toBe(401);
+    expect(again.status).toBe(403);
+    expectErrorShape(again.body, 'account_inactive');
+    expect(again.body.error.message).toMatch(/switched off.*Ask your shop's Dilato admin \(.+\)/);
+    // A wrong password says nothing about the account.
+    const wrong = await client(t.app).post('/api/auth/sign-in').send({ email: 'sales@dilato.test', password: 'not-the-password' });
+    expect(wrong.status).toBe(401);
+    expectErrorShape(wrong.body, 'invalid_credentials');
   });
 
   it('when the admin changes a role, then the user signs in again and has the new role', async () => {

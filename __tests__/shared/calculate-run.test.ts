@@ -4,7 +4,7 @@ import { EngineInputError, isEngineInputError } from '../../shared/engine/errors
 import { prepareStrainCurve } from '../../shared/engine/expansion';
 import { runGrowthMm } from '../../shared/engine/run-growth';
 import type { AlloyData, FlexPart, RunInput, Segment } from '../../shared/engine/types';
-import { inToMm } from '../../shared/units';
+import { inToMm, wordPhrase } from '../../shared/units';
 import { enCarbonElongation, enStainlessElongation, enStainlessElongationIntegral, meanCteTable, range, stainless304 } from './published';
 
 // A fixture part, catalogue-like, not data.
@@ -160,7 +160,7 @@ describe('partial data and input warnings', () => {
   it('when one segment ends at a temperature the next does not start at, then a warning names the step', () => {
     const r = calculateRun(base([{ lengthMm: 500, startTempC: 800, endTempC: 700 }, { lengthMm: 500, startTempC: 600, endTempC: 500 }]), alloy);
     const step = r.warnings.find((w) => w.code === 'TEMPERATURE_STEP');
-    expect(step?.message).toMatch(/step of 100 °C/);
+    expect(wordPhrase(step?.message ?? '', 'metric')).toMatch(/step of 100 °C/);
     expect(calculateRun(base([{ lengthMm: 500, startTempC: 800, endTempC: 700 }, { lengthMm: 500, startTempC: 700, endTempC: 500 }]), alloy).warnings.map((w) => w.code)).not.toContain('TEMPERATURE_STEP');
   });
 

@@ -4,6 +4,7 @@ import { DEFAULT_DESIGN_BASIS, TRAVEL_SHARE_NOTE } from '../../shared/engine/des
 import { assessFlexPart, type FlexDuty, FLEX_BORE_FIT_TOLERANCE_MM, sizeFlex } from '../../shared/engine/flex';
 import type { FlexPart, FlexState } from '../../shared/engine/types';
 import { enStainlessElongation, enStainlessElongationIntegral, stainless304 } from './published';
+import { wordPhrase } from '../../shared/units';
 
 // Fixture parts to exercise the rules: catalogue-like, not data.
 const part = (over: Partial<FlexPart> = {}): FlexPart => ({
@@ -75,7 +76,8 @@ describe('flex duty in every direction', () => {
     const a = assessFlexPart(part(), duty(5, -0.5, {}, 3));
     expect(a.lateralUse).toBeCloseTo(3 / 4, 12);
     expect(a.fits).toBe(false);
-    expect(a.reasons.join(' ')).toMatch(/Lateral offset 3 mm is 75 % of its 4 mm rating/);
+    expect(a.reasons.map((r) => wordPhrase(r, 'metric')).join(' ')).toMatch(/Lateral offset 3\.0 mm is 75 % of its 4\.0 mm rating/);
+    expect(a.reasons.map((r) => wordPhrase(r, 'imperial')).join(' ')).toMatch(/Lateral offset 0\.12 in is 75 % of its 0\.16 in rating/);
   });
 
   it('when lateral offset is added, then the compression demand grows by the EJMA lateral term', () => {
@@ -131,7 +133,7 @@ describe('choosing a part', () => {
     expect(r.chosen?.id).toBe('small');
     expect(r.chosen?.fits).toBe(false);
     expect(r.chosenBy).toBe('fabricator');
-    expect(r.noneFitsReason).toMatch(/does not fit/);
+    expect(wordPhrase(r.noneFitsReason ?? '', 'metric')).toMatch(/does not fit/);
   });
 
   it('when heat cycles exceed the part’s rating, then a warning says so; a part with no rating is flagged too', () => {
@@ -142,7 +144,10 @@ describe('choosing a part', () => {
 
   it('when the bore is off by more than the fit tolerance, or the part is rated below its temperature, then it does not fit', () => {
     expect(assessFlexPart(part({ boreMm: 76.2 + FLEX_BORE_FIT_TOLERANCE_MM + 0.1 }), duty(5, -0.5)).fits).toBe(false);
-    expect(assessFlexPart(part({ maxTempC: 800 }), duty(5, -0.5)).reasons.join(' ')).toMatch(/Rated to 800 °C/);
+    const hotReasons = assessFlexPart(part({ maxTempC: 800 }), duty(5, -0.5)).reasons;
+    expect(hotReasons.map((r) => wordPhrase(r, 'metric')).join(' ')).toMatch(/Rated to 800 °C/);
+    // 800 °C = 1472 °F (NIST SP 811 §4.2.1.1)
+    expect(hotReasons.map((r) => wordPhrase(r, 'imperial')).join(' ')).toMatch(/Rated to 1472 °F/);
   });
 });
 

@@ -1,5 +1,6 @@
 import { CAUTION_MARGIN_C, limitWarnings, peakTempC, temperatureLimit, warningRangesHit } from '../../shared/engine/limits';
 import { stainless304 } from './published';
+import { wordPhrase } from '../../shared/units';
 
 // 304 service limits in air: 870 °C intermittent, 925 °C continuous (reference-data §3.1, [SEEN] stockholder and supplier data).
 const alloy304 = stainless304();
@@ -23,7 +24,7 @@ describe('temperature limits', () => {
     const l = temperatureLimit(alloy304, 900);
     expect(l.status).toBe('over');
     expect(l.marginC).toBe(-30);
-    expect(limitWarnings(l, 900)[0].message).toMatch(/30 °C above/);
+    expect(wordPhrase(limitWarnings(l, 900)[0].message, 'metric')).toMatch(/30 °C above/);
   });
 
   it('when continuous is the lower limit (ferritic grades), then it governs', () => {

@@ -5,6 +5,7 @@ import { checkSystem } from '../../shared/jobs/system-check';
 import { movementWords } from '../../shared/jobs/support-plan';
 import type { RunFields, RunView } from '../../shared/schemas/jobs';
 import { enStainlessElongation, enStainlessElongationIntegral, stainless304 } from './published';
+import { wordPhrase } from '../../shared/units';
 
 // 304 on the EN 1993-1-2 Annex C law; 3 in × 16 ga tube (76.2 × 1.651 mm).
 const alloy = stainless304();
@@ -38,7 +39,10 @@ describe('stretches between held points', () => {
   it('when a run is held by flanges at both ends with no joint, then it is flagged with its growth (EN Annex C: 10.687 mm for 1 m at 600 °C)', () => {
     const f = checkSystem([run({})], DEFAULT_SYSTEM_BASIS).findings.find((x) => x.code === 'STRETCH_WITHOUT_JOINT');
     expect(f?.severity).toBe('danger');
-    expect(f?.message).toContain(`${(1000 * enStainlessElongation(600)).toFixed(1)} mm of growth`);
+    expect(wordPhrase(f?.message ?? '', 'metric')).toContain(`${(1000 * enStainlessElongation(600)).toFixed(1)} mm of growth`);
+    // The same finding for an imperial reader: 1 in = 25.4 mm exactly (NIST SP 811 App. B).
+    expect(wordPhrase(f?.message ?? '', 'imperial')).toContain(`${((1000 * enStainlessElongation(600)) / 25.4).toFixed(2)} in of growth`);
+    expect(wordPhrase(f?.message ?? '', 'imperial')).not.toMatch(/ mm\b/);
   });
 
   it('when two runs meet at a sliding bracket between two flanges, then the whole stretch is flagged; a flex anywhere in it clears it', () => {
@@ -46,8 +50,8 @@ describe('stretches between held points', () => {
     const b = run({ startFixing: 'sliding_bracket' });
     const found = checkSystem([a, b], DEFAULT_SYSTEM_BASIS).findings.filter((x) => x.code === 'STRETCH_WITHOUT_JOINT');
     expect(found).toHaveLength(1);
-    expect(found[0].message).toContain(`${a.name}, ${b.name}`);
-    expect(found[0].message).toContain(`${(2000 * enStainlessElongation(600)).toFixed(1)} mm`);
+    expect(wordPhrase(found[0].message, 'metric')).toContain(`${a.name}, ${b.name}`);
+    expect(wordPhrase(found[0].message, 'metric')).toContain(`${(2000 * enStainlessElongation(600)).toFixed(1)} mm`);
     expect(codes([a, run({ startFixing: 'sliding_bracket', joint: { type: 'flex', atMm: 500 }, supports: [{ kind: 'hanger', atMm: 400 }, { kind: 'hanger', atMm: 600 }] })])).not.toContain('STRETCH_WITHOUT_JOINT');
   });
 
@@ -62,7 +66,7 @@ describe('the engine flange does not carry the pipe', () => {
     const r = run({ startFixing: 'turbo_outlet', endFixing: 'free_end', segments: [{ lengthMm: 800, startTempC: 800, endTempC: 700 }] });
     const f = checkSystem([r], DEFAULT_SYSTEM_BASIS).findings.find((x) => x.code === 'ENGINE_CARRIES_WEIGHT');
     expect(f?.severity).toBe('danger');
-    expect(f?.message).toContain(`${(MASS_PER_MM * 800).toFixed(1)} kg hangs on the turbo outlet`);
+    expect(wordPhrase(f?.message ?? '', 'metric')).toContain(`${(MASS_PER_MM * 800).toFixed(1)} kg hangs on the turbo outlet`);
   });
 
   it('when a run joins two engine flanges (manifold to turbo), then it counts as part of the engine, not a load on it', () => {
@@ -76,7 +80,7 @@ describe('the engine flange does not carry the pipe', () => {
     const f = checkSystem([far], DEFAULT_SYSTEM_BASIS).findings.find((x) => x.code === 'ENGINE_CARRIES_WEIGHT');
     expect(f?.severity).toBe('warning');
     // Simply supported span of 500 mm: each end carries half its weight (beam statics).
-    expect(f?.message).toContain(`about ${((MASS_PER_MM * 500) / 2).toFixed(1)} kg`);
+    expect(wordPhrase(f?.message ?? '', 'metric')).toContain(`about ${((MASS_PER_MM * 500) / 2).toFixed(1)} kg`);
     expect(codes([run({ startFixing: 'turbo_outlet', endFixing: 'free_end', supports: [{ kind: 'hanger', atMm: 250 }] })])).not.toContain('ENGINE_CARRIES_WEIGHT');
   });
 });
@@ -91,7 +95,7 @@ describe('supports beside joints', () => {
   it('when one side has none, then that side is named', () => {
     const f = checkSystem([flexRun([{ kind: 'sliding', atMm: 400 }])], DEFAULT_SYSTEM_BASIS).findings.filter((x) => x.code === 'JOINT_UNSUPPORTED');
     expect(f).toHaveLength(1);
-    expect(f[0].message).toContain('end side of the flex section');
+    expect(wordPhrase(f[0].message, 'metric')).toContain('end side of the flex section');
   });
 
   it('when the flex has no position, then the check asks for it', () => {
@@ -130,7 +134,7 @@ describe('hot clearance to nearby items', () => {
     expect(item.ok).toBe(false);
     expect(item.minimumMm).toBe(150);
     const f = check.findings.find((x) => x.code === 'NEARBY_TOO_CLOSE');
-    expect(f?.message).toMatch(/fit a heat shield or reroute it\. Fuel and brake lines near a hot exhaust skin are a fire risk/);
+    expect(wordPhrase(f?.message ?? '', 'metric')).toMatch(/fit a heat shield or reroute it\. Fuel and brake lines near a hot exhaust skin are a fire risk/);
   });
 
   it('when an item lies in line with the pipe’s free end, then the gap closes by the whole growth', () => {

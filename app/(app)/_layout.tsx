@@ -1,4 +1,6 @@
-import { Redirect, Slot } from 'expo-router';
+import { Redirect, Slot, usePathname } from 'expo-router';
+import { Platform } from 'react-native';
+import { signInHref } from '../../components/auth/next-path';
 import { AppShell } from '../../components/nav/app-shell';
 import { ErrorBanner } from '../../components/ui/error-banner';
 import { LoadingState } from '../../components/ui/loading-state';
@@ -9,6 +11,7 @@ import { useSessionQuery, useSignOutMutation } from '../../hooks/use-session';
 export default function AppLayout() {
   const session = useSessionQuery();
   const signOut = useSignOutMutation();
+  const pathname = usePathname();
 
   if (session.isPending) return <LoadingState label="Checking your session…" />;
   if (session.isError) {
@@ -22,7 +25,8 @@ export default function AppLayout() {
       </Screen>
     );
   }
-  if (!session.data) return <Redirect href="/sign-in" />;
+  // A link opened while signed out comes back after sign-in (sign-out goes home, not back).
+  if (!session.data) return <Redirect href={!signOut.isIdle ? '/sign-in' : signInHref(openedPath(pathname))} />;
 
   return (
     <AppShell
@@ -34,4 +38,10 @@ export default function AppLayout() {
       <Slot />
     </AppShell>
   );
+}
+
+
+/** The path the person opened, with its query on the web (a compare link carries its alloys there). */
+function openedPath(pathname: string): string {
+  return Platform.OS === 'web' && typeof window !== 'undefined' ? `${window.location.pathname}${window.location.search}` : pathname;
 }

@@ -7,10 +7,12 @@ import { Text } from '../../components/ui/text';
 import { spacing } from '../../constants/theme';
 import { useSessionQuery } from '../../hooks/use-session';
 import { ROLE_LABELS } from '../../shared/schemas/auth';
+import { useScreenTitle } from '../../components/ui/use-screen-title';
 
 export default function HomeScreen() {
   const { data: user } = useSessionQuery();
   // The (app) layout only renders this once the session is known.
+  useScreenTitle(user ? `${ROLE_LABELS[user.role]} home` : 'Home');
   if (!user) return <LoadingState />;
 
   return (

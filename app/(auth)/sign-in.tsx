@@ -6,6 +6,7 @@ import { Text } from '../../components/ui/text';
 import { colors, radii, spacing } from '../../constants/theme';
 import { isApiError, messageOf } from '../../hooks/api-client';
 import { useSignInMutation } from '../../hooks/use-session';
+import { useScreenTitle } from '../../components/ui/use-screen-title';
 
 export default function SignInScreen() {
   const signIn = useSignInMutation();
@@ -15,6 +16,7 @@ export default function SignInScreen() {
   const hasFieldErrors = serverFields && Object.keys(serverFields).length > 0;
   const failure = error && !hasFieldErrors ? messageOf(error) : undefined;
 
+  useScreenTitle('Sign in');
   return (
     <Screen narrow>
       <View style={styles.brand}>
@@ -39,6 +41,9 @@ export default function SignInScreen() {
           submitting={signIn.isPending}
           failure={failure}
           serverFields={serverFields}
+          onEdit={() => {
+            if (signIn.error) signIn.reset();
+          }}
         />
       </Card>
       <Text variant="caption" tone="muted">

@@ -6,6 +6,7 @@ import { LoadingState } from '../../components/ui/loading-state';
 import { Screen } from '../../components/ui/screen';
 import { isApiError } from '../../hooks/api-client';
 import { usePublicDecisionMutation, usePublicQuoteQuery } from '../../hooks/use-public-quote';
+import { useScreenTitle } from '../../components/ui/use-screen-title';
 
 /** The customer's private link: no account, and no way from here into the shop's app. */
 export default function PublicQuoteScreen() {
@@ -13,6 +14,7 @@ export default function PublicQuoteScreen() {
   const quote = usePublicQuoteQuery(token);
   const decide = usePublicDecisionMutation(token);
 
+  useScreenTitle(quote.data ? `Quote ${quote.data.number}` : 'Your quote', quote.data?.shopName);
   if (quote.isPending) return <LoadingState label="Opening your quote…" />;
   if (quote.isError) {
     const error = quote.error;

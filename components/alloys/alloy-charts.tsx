@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import type { AlloyVersionView } from '../../shared/schemas/alloy';
-import { cteMetricToImperial, toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
+import { cteMetricToImperial, growthBasisWords, toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
 import { LineChart } from '../charts/line-chart';
 import { COLD_C, cteCurve, growthAt, growthCurve, maxDataC } from './curves';
 import { cteUnit, formatGrowth, formatTemp } from './format';
@@ -21,7 +21,7 @@ export function AlloyCharts({ version, units }: { version: AlloyVersionView; uni
   return (
     <View style={styles.charts}>
       <LineChart
-        title="Growth per metre against temperature"
+        title={`Growth ${growthBasisWords(units)} against temperature`}
         summary={`From ${formatTemp(COLD_C, units)} up to ${formatTemp(maxDataC(version), units)} the tube grows ${
           top ? `${top.y.toFixed(2)} ${unitLabel('growthPerLength', units)}` : 'by an unknown amount'
         }.`}

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import { ALLOY_FAMILIES, type AlloyFamily } from '../../shared/schemas/alloy';
-import { fromDisplay, unitLabel, type UnitSystem } from '../../shared/units';
+import { formatQuantity, fromDisplay, growthBasisWords, unitLabel, type UnitSystem } from '../../shared/units';
 import { SegmentedControl } from '../ui/segmented-control';
 import { TextField } from '../ui/text-field';
 import { CheckBox } from '../ui/check-box';
@@ -81,7 +81,7 @@ export function AlloyFilters({ values, onChange, units, canSeeUnpublished, atErr
             onChangeText={(v) => set('at', v)}
             inputMode="numeric"
             error={atError}
-            hint="From 20 °C, per metre of tube"
+            hint={`From ${formatQuantity('temperature', 20, units).text}, ${growthBasisWords(units)} of tube`}
           />
         </View>
       </View>
@@ -128,6 +128,6 @@ export function toListParams(values: AlloyFilterValues, units: UnitSystem) {
     },
     atC,
     minServiceError: minServiceC === null ? 'Enter a number' : undefined,
-    atError: atOk || values.at.trim() === '' ? undefined : 'Enter a temperature from −50 to 1500 °C',
+    atError: atOk || values.at.trim() === '' ? undefined : `Enter a temperature from ${formatQuantity('temperature', -50, units).text.replace('-', '−')} to ${formatQuantity('temperature', 1500, units).text}`,
   };
 }

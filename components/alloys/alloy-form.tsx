@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { type Control, Controller, type FieldErrors, type FieldPath, useFieldArray, useForm } from 'react-hook-form';
+import { type Control, Controller, type FieldErrors, type FieldPath, useFieldArray } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { colors, spacing } from '../../constants/theme';
 import { messageOf } from '../../hooks/api-client';
@@ -25,6 +25,7 @@ import { NumberField } from '../ui/number-field';
 import { PointsTableField } from './points-table-field';
 import { placeServerErrors } from '../ui/server-errors';
 import { SourcePicker } from './source-picker';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 const FAMILY_OPTIONS = ALLOY_FAMILIES.map((f) => ({ value: f, label: familyLabel(f) }));
 
@@ -55,7 +56,7 @@ export function AlloyForm({ defaultValues, sources, onCreateSource, onSubmit, su
     handleSubmit,
     setError,
     formState: { errors, isSubmitting, submitCount, isValid },
-  } = useForm<AlloyInputDraft, unknown, AlloyInput>({ resolver: zodResolver(alloyInputSchema), defaultValues });
+  } = useCheckedForm<AlloyInputDraft, unknown, AlloyInput>({ resolver: zodResolver(alloyInputSchema), defaultValues });
   const t = unitLabel('temperature', units);
 
   const submit = handleSubmit(async (values) => {

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { colors, spacing } from '../../constants/theme';
 import type { AlloyVersionView } from '../../shared/schemas/alloy';
-import type { UnitSystem } from '../../shared/units';
+import { phraseOfText, type UnitSystem, wordPhrase } from '../../shared/units';
 import { Text } from '../ui/text';
 import { formatCte, formatDensity, formatModulus, formatPrice, formatStress, formatTemp, formatTempRange } from './format';
 import { Fact } from '../ui/fact';
@@ -18,6 +18,8 @@ export interface AlloyPropertiesProps {
 /** Every property of one version, each beside the source it cites. */
 export function AlloyProperties({ version: v, index, units }: AlloyPropertiesProps) {
   const unverified = toBeVerified(v, (id) => index.get(id)?.source.kind === 'memory');
+  // The catalogue's texts are written in °C; their temperatures read in the user's units.
+  const inUnits = (text: string) => wordPhrase(phraseOfText(text), units);
   return (
     <View style={styles.wrapper}>
       {v.dataCautions || unverified.length > 0 ? (
@@ -25,11 +27,11 @@ export function AlloyProperties({ version: v, index, units }: AlloyPropertiesPro
           <Text variant="heading" headingLevel={3}>
             Data cautions
           </Text>
-          {v.dataCautions ? <Text selectable>{v.dataCautions}</Text> : null}
+          {v.dataCautions ? <Text selectable>{inUnits(v.dataCautions)}</Text> : null}
           {unverified.length > 0 ? (
             <View style={styles.inline}>
               <Tag label="To be verified" tone="warning" />
-              <Text>{unverified.join('; ')}</Text>
+              <Text>{inUnits(unverified.join('; '))}</Text>
             </View>
           ) : null}
         </View>
@@ -65,7 +67,7 @@ export function AlloyProperties({ version: v, index, units }: AlloyPropertiesPro
               <Text variant="bodyStrong" tone="warning">
                 {formatTempRange(w.fromC, w.toC, units)}
               </Text>
-              <Text>{w.message}</Text>
+              <Text>{inUnits(w.message)}</Text>
             </View>
           ))}
         </View>
@@ -76,7 +78,7 @@ export function AlloyProperties({ version: v, index, units }: AlloyPropertiesPro
           <Text variant="heading" headingLevel={3}>
             Notes
           </Text>
-          <Text selectable>{v.notes}</Text>
+          <Text selectable>{inUnits(v.notes)}</Text>
         </View>
       ) : null}
 

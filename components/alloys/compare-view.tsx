@@ -1,7 +1,7 @@
-import { StyleSheet, View } from 'react-native';
-import { colors, spacing } from '../../constants/theme';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { colors, layout, spacing } from '../../constants/theme';
 import type { AlloyVersionView } from '../../shared/schemas/alloy';
-import { toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
+import { growthBasisWords, toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
 import { LineChart } from '../charts/line-chart';
 import { Text } from '../ui/text';
 import { COLD_C, growthAt, growthCurve, maxDataC } from './curves';
@@ -16,6 +16,8 @@ export interface CompareViewProps {
 
 /** Curves overlaid and one table of what a shop weighs up between alloys. */
 export function CompareView({ alloys, atC, units }: CompareViewProps) {
+  // Four columns on a phone leave ~90 px each, and "Austenitic" would break mid-word: list instead.
+  const phone = useWindowDimensions().width < layout.phoneMaxWidth;
   const rows: { label: string; cell: (v: AlloyVersionView) => string; demo?: (v: AlloyVersionView) => boolean }[] = [
     { label: 'UNS', cell: (v) => v.uns },
     { label: 'Family', cell: (v) => familyLabel(v.family) },
@@ -36,7 +38,7 @@ export function CompareView({ alloys, atC, units }: CompareViewProps) {
   return (
     <View style={styles.wrapper}>
       <LineChart
-        title={`Growth per metre from ${formatTemp(COLD_C, units)}`}
+        title={`Growth ${growthBasisWords(units)} from ${formatTemp(COLD_C, units)}`}
         summary={alloys
           .map((v) => {
             const g = growthAt(v, atC);
@@ -52,31 +54,50 @@ export function CompareView({ alloys, atC, units }: CompareViewProps) {
         yAxis={{ label: unitLabel('growthPerLength', units), format: (v) => v.toFixed(1) }}
       />
 
-      <View role="table" aria-label="Comparison" style={styles.table}>
-        <View role="row" style={[styles.row, styles.headRow]}>
-          <View role="columnheader" style={styles.labelCell}>
-            <Text variant="label">Property</Text>
-          </View>
-          {alloys.map((v) => (
-            <View key={v.versionId} role="columnheader" style={styles.cell}>
-              <Text variant="bodyStrong">{v.designation}</Text>
+      {phone ? (
+        <View role="list" aria-label="Comparison" style={styles.list}>
+          {rows.map((r) => (
+            <View key={r.label} role="listitem" style={styles.item}>
+              <Text variant="label">{r.label}</Text>
+              {alloys.map((v) => (
+                <View key={v.versionId} style={styles.itemRow}>
+                  <Text variant="caption" tone="muted" style={styles.itemName}>
+                    {v.designation}
+                  </Text>
+                  <Text style={styles.itemValue}>{r.cell(v)}</Text>
+                  {r.demo?.(v) ? <Tag label="demo" /> : null}
+                </View>
+              ))}
             </View>
           ))}
         </View>
-        {rows.map((r) => (
-          <View key={r.label} role="row" style={styles.row}>
-            <View role="rowheader" style={styles.labelCell}>
-              <Text variant="label">{r.label}</Text>
+      ) : (
+        <View role="table" aria-label="Comparison" style={styles.table}>
+          <View role="row" style={[styles.row, styles.headRow]}>
+            <View role="columnheader" style={styles.labelCell}>
+              <Text variant="label">Property</Text>
             </View>
             {alloys.map((v) => (
-              <View key={v.versionId} role="cell" style={styles.cell}>
-                <Text>{r.cell(v)}</Text>
-                {r.demo?.(v) ? <Tag label="demo" /> : null}
+              <View key={v.versionId} role="columnheader" style={styles.cell}>
+                <Text variant="bodyStrong">{v.designation}</Text>
               </View>
             ))}
           </View>
-        ))}
-      </View>
+          {rows.map((r) => (
+            <View key={r.label} role="row" style={styles.row}>
+              <View role="rowheader" style={styles.labelCell}>
+                <Text variant="label">{r.label}</Text>
+              </View>
+              {alloys.map((v) => (
+                <View key={v.versionId} role="cell" style={styles.cell}>
+                  <Text>{r.cell(v)}</Text>
+                  {r.demo?.(v) ? <Tag label="demo" /> : null}
+                </View>
+              ))}
+            </View>
+          ))}
+        </View>
+      )}
     </View>
   );
 }
@@ -88,4 +109,9 @@ const styles = StyleSheet.create({
   headRow: { backgroundColor: colors.surfaceSunken },
   labelCell: { flex: 1.2, padding: spacing.sm },
   cell: { flex: 1, padding: spacing.sm, gap: spacing.xxs, minWidth: 0 },
+  list: { borderTopWidth: 1, borderTopColor: colors.border },
+  item: { paddingVertical: spacing.sm, borderBottomWidth: 1, borderBottomColor: colors.border, gap: spacing.xxs },
+  itemRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', gap: spacing.sm },
+  itemName: { flexBasis: 120, flexShrink: 0 },
+  itemValue: { flex: 1, minWidth: 140 },
 });

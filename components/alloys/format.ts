@@ -12,8 +12,9 @@ import {
 } from '../../shared/units';
 
 /**
- * The catalogue shows metric for now; every formatter takes the system so that a later
- * per-user preference only has to pass a different value down from the screens.
+ * The alloy form and review enter and check catalogue data in metric, the units its sources
+ * publish (the property tables are typed as the data sheet gives them); the catalogue's reading
+ * screens follow the user's units.
  */
 export const CATALOGUE_UNITS: UnitSystem = 'metric';
 

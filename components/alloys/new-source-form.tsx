@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '../../constants/theme';
 import { isApiError, messageOf } from '../../hooks/api-client';
@@ -9,6 +9,7 @@ import { Button } from '../ui/button';
 import { ErrorBanner } from '../ui/error-banner';
 import { SegmentedControl } from '../ui/segmented-control';
 import { TextField } from '../ui/text-field';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 const KIND_OPTIONS = SOURCE_KINDS.map((k) => ({ value: k, label: SOURCE_KIND_LABELS[k] }));
 const FIELDS = ['kind', 'title', 'issuer', 'edition', 'url', 'note'] as const;
@@ -23,7 +24,7 @@ type SourceDraft = { kind: SourceInput['kind']; title: string; issuer?: string |
 
 export function NewSourceForm({ onCreate, onCreated, onCancel }: NewSourceFormProps) {
   const [failure, setFailure] = useState<string>();
-  const { control, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<SourceDraft, unknown, SourceInput>({
+  const { control, handleSubmit, setError, formState: { errors, isSubmitting } } = useCheckedForm<SourceDraft, unknown, SourceInput>({
     resolver: zodResolver(sourceInputSchema),
     defaultValues: { kind: 'datasheet', title: '', issuer: '', edition: '', url: null, note: '' },
   });

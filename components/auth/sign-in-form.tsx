@@ -1,12 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useRef } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller } from 'react-hook-form';
 import { StyleSheet, type TextInput, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import { signInSchema, type SignInInput } from '../../shared/schemas/auth';
 import { Button } from '../ui/button';
 import { ErrorBanner } from '../ui/error-banner';
 import { TextField } from '../ui/text-field';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 export interface SignInFormProps {
   onSubmit: (values: SignInInput) => void;
@@ -15,19 +16,21 @@ export interface SignInFormProps {
   failure?: string;
   /** Field messages from the server, shown under their fields. */
   serverFields?: Record<string, string>;
+  /** Called as the person changes a field or the form finds a field error, so a stale failure goes. */
+  onEdit?: () => void;
 }
 
-export function SignInForm({ onSubmit, submitting, failure, serverFields = {} }: SignInFormProps) {
+export function SignInForm({ onSubmit, submitting, failure, serverFields = {}, onEdit }: SignInFormProps) {
   const passwordRef = useRef<TextInput>(null);
   const {
     control,
     handleSubmit,
     formState: { errors },
-  } = useForm<SignInInput>({
+  } = useCheckedForm<SignInInput>({
     resolver: zodResolver(signInSchema),
     defaultValues: { email: '', password: '' },
-  });
-  const submit = handleSubmit(onSubmit);
+  }, { guard: false });
+  const submit = handleSubmit(onSubmit, () => onEdit?.());
 
   return (
     <View style={styles.form}>
@@ -40,7 +43,10 @@ export function SignInForm({ onSubmit, submitting, failure, serverFields = {} }:
             ref={ref}
             label="Email"
             value={value}
-            onChangeText={onChange}
+            onChangeText={(text) => {
+              onEdit?.();
+              onChange(text);
+            }}
             onBlur={onBlur}
             error={errors.email?.message ?? serverFields.email}
             autoCapitalize="none"
@@ -65,7 +71,10 @@ export function SignInForm({ onSubmit, submitting, failure, serverFields = {} }:
             }}
             label="Password"
             value={value}
-            onChangeText={onChange}
+            onChangeText={(text) => {
+              onEdit?.();
+              onChange(text);
+            }}
             onBlur={onBlur}
             error={errors.password?.message ?? serverFields.password}
             secureTextEntry

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { z } from 'zod';
 import { spacing } from '../../constants/theme';
@@ -10,6 +10,7 @@ import { ErrorBanner } from '../ui/error-banner';
 import { NumberField } from '../ui/number-field';
 import { placeServerErrors } from '../ui/server-errors';
 import { TextField } from '../ui/text-field';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 const formSchema = currencyRateInputSchema.extend({ from: currencyCodeSchema });
 type FormValues = z.infer<typeof formSchema>;
@@ -22,7 +23,7 @@ export interface RateFormProps {
 /** Sets (or replaces) the rate from one currency into the shop's. */
 export function RateForm({ shopCurrency, onSubmit }: RateFormProps) {
   const [failure, setFailure] = useState<string | null>(null);
-  const { control, handleSubmit, reset, setError, formState } = useForm<z.input<typeof formSchema>, unknown, FormValues>({
+  const { control, handleSubmit, reset, setError, formState } = useCheckedForm<z.input<typeof formSchema>, unknown, FormValues>({
     resolver: zodResolver(formSchema),
     defaultValues: { from: '', rate: Number.NaN },
   });

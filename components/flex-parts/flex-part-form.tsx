@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, type FieldPath, useForm } from 'react-hook-form';
+import { Controller, type FieldPath } from 'react-hook-form';
 import type { z } from 'zod';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
@@ -8,27 +8,31 @@ import { messageOf } from '../../hooks/api-client';
 import { FLEX_PURPOSES } from '../../shared/engine/flex-purposes';
 import { FLEX_PURPOSE_LABELS, flexPartInputSchema, type FlexPartInput } from '../../shared/schemas/alloy';
 import { ChoicePicker } from '../ui/choice-picker';
-import { NumberField } from '../ui/number-field';
 import { placeServerErrors } from '../ui/server-errors';
 import { Button } from '../ui/button';
 import { ErrorBanner } from '../ui/error-banner';
 import { TextField } from '../ui/text-field';
+import { useCheckedForm } from '../forms/use-checked-form';
+import { useUnits } from '../../hooks/use-units';
+import type { QuantityKind } from '../../shared/units';
+import { UnitNumberField } from '../units/unit-number-field';
 
 /** What the form holds: the schema's input, where `active` may be left out. */
 type Draft = z.input<typeof flexPartInputSchema>;
 
 /** `optional` fields may be left empty (saved as "not given"). */
-const NUMBERS: { name: FieldPath<Draft>; label: string; hint?: string; optional?: boolean }[] = [
-  { name: 'boreMm', label: 'Bore (mm)' },
-  { name: 'liveLengthMm', label: 'Live length (mm)', hint: 'The convoluted length' },
-  { name: 'overallLengthMm', label: 'Overall length (mm)', hint: 'Face to face; empty: the live length', optional: true },
-  { name: 'meanDiameterMm', label: 'Mean diameter (mm)', hint: 'Of the convolutions, from the maker’s drawing; empty: estimated as 1.15 × bore', optional: true },
-  { name: 'ratedAxialCompressionMm', label: 'Rated compression (mm)' },
-  { name: 'ratedAxialExtensionMm', label: 'Rated extension (mm)' },
-  { name: 'lateralOffsetMm', label: 'Lateral offset (mm)' },
+/** Lengths and the temperature are typed in the user's units (the label says which) and kept in mm and °C. */
+const NUMBERS: { name: FieldPath<Draft>; label: string; kind?: QuantityKind; hint?: string; optional?: boolean }[] = [
+  { name: 'boreMm', label: 'Bore', kind: 'length' },
+  { name: 'liveLengthMm', label: 'Live length', kind: 'length', hint: 'The convoluted length' },
+  { name: 'overallLengthMm', label: 'Overall length', kind: 'length', hint: 'Face to face; empty: the live length', optional: true },
+  { name: 'meanDiameterMm', label: 'Mean diameter', kind: 'length', hint: 'Of the convolutions, from the maker’s drawing; empty: estimated as 1.15 × bore', optional: true },
+  { name: 'ratedAxialCompressionMm', label: 'Rated compression', kind: 'length' },
+  { name: 'ratedAxialExtensionMm', label: 'Rated extension', kind: 'length' },
+  { name: 'lateralOffsetMm', label: 'Lateral offset', kind: 'length' },
   { name: 'ratedAngularDeg', label: 'Rated rotation (°)' },
   { name: 'ratedCycles', label: 'Rated cycles', hint: 'At the rated movements; empty: not rated', optional: true },
-  { name: 'maxTempC', label: 'Maximum temperature (°C)' },
+  { name: 'maxTempC', label: 'Maximum temperature', kind: 'temperature' },
   { name: 'price', label: 'Price' },
 ];
 
@@ -65,11 +69,12 @@ export interface FlexPartFormProps {
 
 export function FlexPartForm({ defaultValues, submitLabel, onSubmit, onCancel, context }: FlexPartFormProps) {
   const [failure, setFailure] = useState<string>();
-  const { control, handleSubmit, setError, reset, formState: { errors, isSubmitting } } = useForm<Draft, unknown, FlexPartInput>({
+  const { control, handleSubmit, setError, reset, formState: { errors, isSubmitting } } = useCheckedForm<Draft, unknown, FlexPartInput>({
     resolver: zodResolver(flexPartInputSchema),
     defaultValues,
   });
   const suffix = context ? `, ${context}` : '';
+  const units = useUnits();
 
   const submit = handleSubmit(async (values) => {
     setFailure(undefined);
@@ -133,15 +138,18 @@ export function FlexPartForm({ defaultValues, submitLabel, onSubmit, onCancel, c
         )}
       />
       <View style={styles.grid}>
-        {NUMBERS.map(({ name, label, hint, optional }) => (
+        {NUMBERS.map(({ name, label, kind, hint, optional }) => (
           <View key={name} style={styles.cell}>
             <Controller
               control={control}
               name={name}
               render={({ field }) => (
-                <NumberField
+                <UnitNumberField
                   ref={field.ref}
-                  label={`${label}${suffix}`}
+                  label={label}
+                  labelSuffix={suffix}
+                  kind={kind}
+                  units={units}
                   value={(field.value as number | null) ?? Number.NaN}
                   onChange={(v: number) => field.onChange(optional && Number.isNaN(v) ? null : v)}
                   hint={hint}

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller } from 'react-hook-form';
 import type { z } from 'zod';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
@@ -9,6 +9,7 @@ import { jobCreateSchema, type JobCreateInput } from '../../shared/schemas/jobs'
 import { Button } from '../ui/button';
 import { ErrorBanner } from '../ui/error-banner';
 import { TextField } from '../ui/text-field';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 const FIELDS = [
   { name: 'name', label: 'Job name', hint: undefined },
@@ -34,7 +35,7 @@ export function JobForm({ defaultValues = EMPTY, submitLabel, onSubmit, onCancel
     handleSubmit,
     setError,
     formState: { errors, isSubmitting },
-  } = useForm<z.input<typeof jobCreateSchema>, unknown, JobCreateInput>({ resolver: zodResolver(jobCreateSchema), defaultValues });
+  } = useCheckedForm<z.input<typeof jobCreateSchema>, unknown, JobCreateInput>({ resolver: zodResolver(jobCreateSchema), defaultValues });
 
   const submit = handleSubmit(async (values) => {
     setFailure(undefined);

@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '../../constants/theme';
 import { fixedPointLabel } from '../../shared/jobs/fixed-points';
 import type { JobDetail, RunView } from '../../shared/schemas/jobs';
-import { type UnitSystem, wallMmToGauge } from '../../shared/units';
+import { type UnitSystem, wallMmToGauge, wordPhrase } from '../../shared/units';
 import { CautionsNote } from '../ui/cautions-note';
 import { Text } from '../ui/text';
 import { show, showMoney } from '../units/format';
@@ -32,12 +32,12 @@ function jointLine(run: RunView, units: UnitSystem): string {
   if (j.type === 'none') return 'None';
   if (j.type === 'flex') {
     const chosen = r?.flex?.chosen;
-    if (!chosen || !chosen.fits || chosen.presetMm === null) return r?.flex?.noneFitsReason ?? 'Flex section: no part fits';
+    if (!chosen || !chosen.fits || chosen.presetMm === null) return r?.flex?.noneFitsReason ? wordPhrase(r.flex.noneFitsReason, units) : 'Flex section: no part fits';
     const at = j.atMm === undefined ? '' : `, centred ${show('length', j.atMm, units)} from the start`;
     return `Flex section ${chosen.name}${at}. ${presetWords(chosen.presetMm, units)}`;
   }
   const s = r?.slip;
-  const failing = s?.checks.filter((c) => !c.ok).map((c) => c.message) ?? [];
+  const failing = s?.checks.filter((c) => !c.ok).map((c) => wordPhrase(c.message, units)) ?? [];
   const verdict = !s ? 'not worked out' : failing.length === 0 ? 'every check passes' : `needs changes: ${failing.join('; ')}`;
   return `Slip joint: engage ${show('length', j.coldEngagementMm, units)}, leave a ${show('length', j.coldAxialGapMm, units)} gap, clearance ${show(
     'smallLength',
@@ -49,7 +49,7 @@ function jointLine(run: RunView, units: UnitSystem): string {
 function cutLine(run: RunView, units: UnitSystem): string {
   const cut = cutLengths(runLength(run), run.joint, run.result);
   const pieces = cut.pieces && cut.pieces.length > 1 ? `${cut.pieces.map((p) => show('length', p, units)).join(' + ')} = ` : '';
-  const note = cut.note ? ` (${cut.note})` : '';
+  const note = cut.note ? ` (${wordPhrase(cut.note, units)})` : '';
   return `${pieces}${show('length', cut.totalMm, units)}${note}`;
 }
 

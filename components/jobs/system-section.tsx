@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import { movementWords } from '../../shared/jobs/support-plan';
 import type { JobDetail } from '../../shared/schemas/jobs';
-import type { UnitSystem } from '../../shared/units';
+import { type UnitSystem, wordPhrase } from '../../shared/units';
 import { Section } from '../ui/section';
 import { Text } from '../ui/text';
 import { show } from '../units/format';
@@ -23,7 +23,7 @@ export function SystemSection({ job, units }: { job: JobDetail; units: UnitSyste
         <View role="list" aria-label="System checks" style={styles.list}>
           {s.findings.map((f, i) => (
             <View role="listitem" key={`${f.code}-${i}`}>
-              <Text tone={f.severity === 'danger' ? 'danger' : 'warning'}>{f.message}.</Text>
+              <Text tone={f.severity === 'danger' ? 'danger' : 'warning'}>{wordPhrase(f.message, units)}.</Text>
             </View>
           ))}
         </View>
@@ -50,7 +50,7 @@ export function SystemSection({ job, units }: { job: JobDetail; units: UnitSyste
             {s.nearby.map((n) => (
               <View role="listitem" key={`${n.runId}-${n.index}`}>
                 <Text tone={n.ok ? 'success' : 'danger'}>
-                  {n.index + 1}. {n.runName}: {n.message}.
+                  {n.index + 1}. {n.runName}: {wordPhrase(n.message, units)}.
                 </Text>
               </View>
             ))}

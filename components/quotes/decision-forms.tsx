@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import type { z } from 'zod';
 import { spacing } from '../../constants/theme';
@@ -10,6 +10,7 @@ import { Button } from '../ui/button';
 import { ErrorBanner } from '../ui/error-banner';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 type Submit<T> = (values: T) => Promise<unknown>;
 
@@ -36,7 +37,7 @@ export function AcceptForm({ optionIndex, optionLabel, onSubmit, onCancel }: { o
     control,
     handleSubmit,
     formState: { errors, isSubmitting },
-  } = useForm<z.input<typeof acceptQuoteSchema>, unknown, z.output<typeof acceptQuoteSchema>>({
+  } = useCheckedForm<z.input<typeof acceptQuoteSchema>, unknown, z.output<typeof acceptQuoteSchema>>({
     resolver: zodResolver(acceptQuoteSchema),
     defaultValues: { optionIndex, name: '' },
   });
@@ -70,7 +71,7 @@ export function DeclineForm({ onSubmit, onCancel }: { onSubmit: Submit<z.output<
     control,
     handleSubmit,
     formState: { errors, isSubmitting },
-  } = useForm<z.input<typeof declineQuoteSchema>, unknown, z.output<typeof declineQuoteSchema>>({
+  } = useCheckedForm<z.input<typeof declineQuoteSchema>, unknown, z.output<typeof declineQuoteSchema>>({
     resolver: zodResolver(declineQuoteSchema),
     defaultValues: { name: '', reason: '' },
   });

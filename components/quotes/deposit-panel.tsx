@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import { messageOf } from '../../hooks/api-client';
@@ -13,6 +13,7 @@ import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { DepositBadge } from './deposit-badge';
 import { formatDateTime } from './format';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 /** The quote's deposit as the shop sees it, and for an admin the refund. */
 export function DepositPanel({ quoteId, deposit, canRefund }: { quoteId: string; deposit: DepositView; canRefund: boolean }) {
@@ -42,7 +43,7 @@ export function DepositPanel({ quoteId, deposit, canRefund }: { quoteId: string;
 
 function RefundForm({ quoteId, amount }: { quoteId: string; amount: string }) {
   const refund = useRefundDepositMutation(quoteId);
-  const { control, handleSubmit, formState } = useForm<RefundDepositInput>({ resolver: zodResolver(refundDepositSchema), defaultValues: { reason: '' } });
+  const { control, handleSubmit, formState } = useCheckedForm<RefundDepositInput>({ resolver: zodResolver(refundDepositSchema), defaultValues: { reason: '' } });
   return (
     <View style={styles.form}>
       <Controller

@@ -1,3 +1,5 @@
+import { formatQuantity, type UnitSystem } from '../../shared/units';
+
 /** Money in the quote's currency; an unknown code falls back to the plain number with the code. */
 export function formatMoney(amount: number, currency: string): string {
   try {
@@ -19,21 +21,24 @@ export function formatPercentDifference(pct: number | null): string {
   return `${sign(pct)}${Math.abs(pct).toFixed(1)} %`;
 }
 
-export function formatKg(kg: number): string {
-  return `${kg.toFixed(2)} kg`;
+/** Masses and temperature margins follow the reader's units; the customer's page (no account) reads metric. */
+export function formatKg(kg: number, units: UnitSystem = 'metric'): string {
+  return formatQuantity('mass', kg, units).text;
 }
 
-export function formatKgDifference(kg: number): string {
-  return `${sign(kg)}${Math.abs(kg).toFixed(2)} kg`;
+export function formatKgDifference(kg: number, units: UnitSystem = 'metric'): string {
+  const f = formatQuantity('mass', Math.abs(kg), units);
+  return `${sign(kg)}${f.text}`;
 }
 
-export function formatDegrees(c: number): string {
-  return `${Math.round(c)} °C`;
+/** A margin or difference of temperature: scales by 9/5 with no 32 °F offset. */
+export function formatDegrees(c: number, units: UnitSystem = 'metric'): string {
+  return formatQuantity('temperatureDelta', c, units).text;
 }
 
-export function formatDegreesDifference(c: number): string {
-  const rounded = Math.round(c);
-  return `${sign(rounded)}${Math.abs(rounded)} °C`;
+export function formatDegreesDifference(c: number, units: UnitSystem = 'metric'): string {
+  const f = formatQuantity('temperatureDelta', c, units);
+  return `${sign(f.value)}${formatQuantity('temperatureDelta', Math.abs(c), units).text}`;
 }
 
 export function formatDateTime(iso: string): string {

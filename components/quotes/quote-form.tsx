@@ -1,9 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useMemo, useState } from 'react';
-import { Controller, useFieldArray, useForm, useWatch } from 'react-hook-form';
+import { Controller, useFieldArray, useWatch } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { layout, spacing } from '../../constants/theme';
 import { useJobQuery } from '../../hooks/use-jobs';
+import { useUnits } from '../../hooks/use-units';
+import { formatQuantity } from '../../shared/units';
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import type { JobSummary } from '../../shared/schemas/jobs';
 import { quoteInputSchema, type QuoteInput, type QuoteInputDraft } from '../../shared/schemas/quotes';
@@ -18,6 +20,7 @@ import { LivePricingPanel } from './live-pricing-panel';
 import { OptionFields } from './option-fields';
 import { placeServerErrors } from '../ui/server-errors';
 import { FieldError } from '../ui/field-error';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 export const MIN_OPTIONS = 2;
 export const MAX_OPTIONS = 4;
@@ -46,16 +49,17 @@ export function QuoteForm({ jobs, alloys, defaultValues, submitLabel, onSubmit, 
     getValues,
     reset,
     formState: { errors, isSubmitting, isDirty },
-  } = useForm<QuoteInputDraft, unknown, QuoteInput>({ resolver: zodResolver(quoteInputSchema), defaultValues });
+  } = useCheckedForm<QuoteInputDraft, unknown, QuoteInput>({ resolver: zodResolver(quoteInputSchema), defaultValues });
   const { fields, append, remove } = useFieldArray({ control, name: 'options' });
   const jobId = useWatch({ control, name: 'jobId' });
   const job = useJobQuery(jobId || undefined);
 
+  const units = useUnits();
   const published = useMemo(() => alloys.filter((a) => a.status === 'published'), [alloys]);
   const priced = useMemo(() => pricedAlloys(published), [published]);
   const alloyChoices = useMemo(
-    () => published.map((a) => ({ value: a.id, label: `${a.designation} (${a.uns})`, hint: `Service to about ${Math.min(a.maxContinuousC, a.maxIntermittentC)} °C` })),
-    [published],
+    () => published.map((a) => ({ value: a.id, label: `${a.designation} (${a.uns})`, hint: `Service to about ${formatQuantity('temperature', Math.min(a.maxContinuousC, a.maxIntermittentC), units).text}` })),
+    [published, units],
   );
   const jobChoices = jobs.map((j) => ({ value: j.id, label: j.name, hint: `${j.customer} · ${j.runCount} run${j.runCount === 1 ? '' : 's'}` }));
   const runs = job.data?.runs.map((r) => ({ id: r.id, name: r.name })) ?? [];

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import type { FlexCandidateResult, FlexResult, FlexStateUse } from '../../shared/engine/types';
-import type { UnitSystem } from '../../shared/units';
+import { type UnitSystem, wordPhrase } from '../../shared/units';
 import { Fact } from '../ui/fact';
 import { Section } from '../ui/section';
 import { Text } from '../ui/text';
@@ -50,20 +50,20 @@ export function FlexSection({ flex, units }: { flex: FlexResult; units: UnitSyst
             </View>
           ) : null}
           {chosen.fits ? <Text>{usesLine(chosen, flex.travelShare)}.</Text> : null}
-          {chosen.reasons.map((r) => (
-            <Text key={r} tone="danger">
-              {r}.
+          {chosen.reasons.map((r, i) => (
+            <Text key={i} tone="danger">
+              {wordPhrase(r, units)}.
             </Text>
           ))}
           {chosen.warnings.map((w) => (
             <Text key={w.code} tone="warning">
-              {w.message}.
+              {wordPhrase(w.message, units)}.
             </Text>
           ))}
         </View>
       ) : (
         <Text tone="danger" variant="bodyStrong">
-          {flex.noneFitsReason ?? 'No flex part in the catalogue fits this run.'}
+          {flex.noneFitsReason ? wordPhrase(flex.noneFitsReason, units) : 'No flex part in the catalogue fits this run.'}
         </Text>
       )}
       <BasisNotes

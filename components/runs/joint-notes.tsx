@@ -1,10 +1,11 @@
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import type { JointCheck } from '../../shared/engine/types';
+import { type UnitSystem, wordPhrase } from '../../shared/units';
 import { Text } from '../ui/text';
 
 /** Each check of a joint as a line a fabricator can act on, failures first. */
-export function CheckList({ checks, label }: { checks: JointCheck[]; label: string }) {
+export function CheckList({ checks, label, units }: { checks: JointCheck[]; label: string; units: UnitSystem }) {
   const ordered = [...checks].sort((a, b) => Number(a.ok) - Number(b.ok));
   return (
     <View role="list" aria-label={label} style={styles.list}>
@@ -12,7 +13,7 @@ export function CheckList({ checks, label }: { checks: JointCheck[]; label: stri
         <View role="listitem" key={c.code}>
           <Text tone={c.ok ? 'success' : 'danger'}>
             {c.ok ? '✓ ' : '✗ '}
-            {c.message}
+            {wordPhrase(c.message, units)}
           </Text>
         </View>
       ))}

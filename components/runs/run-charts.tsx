@@ -2,7 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import type { RunResult } from '../../shared/engine/types';
 import { growthPerMetreAt } from '../../shared/jobs/run-movement';
-import { toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
+import { growthBasisWords, toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
 import { LineChart } from '../charts/line-chart';
 import { show } from '../units/format';
 
@@ -33,7 +33,7 @@ export function RunCharts({ result, designation, units }: { result: RunResult; d
         secondaryYAxis={{ label: `Temperature (${unitLabel('temperature', units)})`, format: fixed(0) }}
       />
       <LineChart
-        title={`Growth per metre against temperature, ${designation}`}
+        title={`Growth ${growthBasisWords(units)} against temperature, ${designation}`}
         summary={`At the run's peak of ${show('temperature', result.peakTempC, units)} the alloy grows ${
           atPeak === null ? 'an unknown amount' : show('growthPerLength', atPeak, units)
         } from the install temperature.`}

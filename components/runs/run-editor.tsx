@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm, useWatch } from 'react-hook-form';
-import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { Controller, useWatch } from 'react-hook-form';
+import { Platform, StyleSheet, useWindowDimensions, View, type ViewStyle } from 'react-native';
 import { layout, spacing } from '../../constants/theme';
 import { isApiError, messageOf } from '../../hooks/api-client';
 import { FIXED_POINTS } from '../../shared/jobs/fixed-points';
@@ -25,6 +25,7 @@ import { RunResults } from './run-results';
 import { SegmentsField } from './segments-field';
 import { TubeFields } from './tube-fields';
 import { useDebounced, useLiveResult } from './use-live-result';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 const FIXING_CHOICES = FIXED_POINTS.map((p) => ({ value: p.id, label: p.label }));
 
@@ -50,7 +51,7 @@ export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabe
     handleSubmit,
     reset,
     formState: { errors, isSubmitting, isDirty },
-  } = useForm<RunFields>({ resolver: zodResolver(runFieldsSchema), defaultValues });
+  } = useCheckedForm<RunFields>({ resolver: zodResolver(runFieldsSchema), defaultValues });
   const values = useWatch({ control }) as RunFields;
   const settled = useDebounced(values);
   const live = useLiveResult(settled);
@@ -178,12 +179,22 @@ export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabe
   return (
     <View style={wide ? styles.columns : styles.stack}>
       <Card style={wide ? styles.formColumn : undefined}>{form}</Card>
-      <View style={wide ? styles.resultsColumn : undefined}>
+      <View style={wide ? [styles.resultsColumn, stickyOnWeb] : undefined}>
         <RunResults live={live} fields={settled} units={units} />
       </View>
     </View>
   );
 }
+
+/**
+ * On a desktop the results stay in view beside the field being edited: the column sticks to the
+ * top of the page's scroller and scrolls on its own when taller than the window. React Native's
+ * types know no `sticky` or `vh`, which only the web has.
+ */
+const stickyOnWeb = Platform.select<ViewStyle>({
+  web: { position: 'sticky', top: spacing.md, maxHeight: `calc(100vh - ${2 * spacing.md}px)`, overflowY: 'auto' } as unknown as ViewStyle,
+  default: {},
+});
 
 const styles = StyleSheet.create({
   stack: { gap: spacing.xxl },

@@ -3,7 +3,7 @@ import { colors, radii, spacing } from '../../constants/theme';
 import { isRestrained } from '../../shared/jobs/fixed-points';
 import type { RunResult } from '../../shared/engine/types';
 import type { RunFields } from '../../shared/schemas/jobs';
-import type { UnitSystem } from '../../shared/units';
+import { type UnitSystem, wordPhrase } from '../../shared/units';
 import { CautionsNote } from '../ui/cautions-note';
 import { Fact } from '../ui/fact';
 import { Section } from '../ui/section';
@@ -82,9 +82,9 @@ function ResultBody({ result, fields, units, designation, currency }: { result: 
       {result.warnings.length > 0 ? (
         <Section title="Warnings">
           <View role="list" aria-label="Warnings" style={styles.list}>
-            {result.warnings.map((w) => (
-              <View key={w.code + w.message} role="listitem" style={styles.warning}>
-                <Text tone="warning">{w.message}</Text>
+            {result.warnings.map((w, i) => (
+              <View key={`${w.code}-${i}`} role="listitem" style={styles.warning}>
+                <Text tone="warning">{wordPhrase(w.message, units)}</Text>
               </View>
             ))}
           </View>

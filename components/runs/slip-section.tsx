@@ -33,7 +33,7 @@ export function SlipSection({ slip, units }: { slip: SlipResult; units: UnitSyst
       <Text tone={slip.verdict === 'ok' ? 'success' : 'danger'} variant="bodyStrong">
         {slip.verdict === 'ok' ? 'Slides and has room: every check passes.' : 'Needs changes before it is built: see the checks.'}
       </Text>
-      <CheckList checks={slip.checks} label="Slip joint checks" />
+      <CheckList checks={slip.checks} label="Slip joint checks" units={units} />
       <Text variant="label">Radial clearance (on one side)</Text>
       <View role="list" aria-label="Radial clearance by state" style={styles.list}>
         {slip.states.map((s) => (

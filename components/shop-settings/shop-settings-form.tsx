@@ -1,19 +1,22 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import type { z } from 'zod';
-import { type Control, Controller, useForm } from 'react-hook-form';
+import { type Control, Controller } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import { ALLOY_FAMILIES, FAMILY_LABELS } from '../../shared/schemas/alloy';
 import { shopSettingsSchema, type ShopSettings } from '../../shared/schemas/shop-settings';
 import { NEARBY_KINDS, NEARBY_LABELS, type NearbyKind } from '../../shared/jobs/nearby';
-import { NumberField } from '../ui/number-field';
+import { useUnits } from '../../hooks/use-units';
+import type { QuantityKind } from '../../shared/units';
+import { UnitNumberField } from '../units/unit-number-field';
 import { placeServerErrors } from '../ui/server-errors';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ErrorBanner } from '../ui/error-banner';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 type Values = z.input<typeof shopSettingsSchema>;
 type NumberPath = 'labourRatePerHour' | 'hoursPerRun' | 'scrapAllowancePct' | 'marginPct' | 'depositSharePct' | 'travelSharePct' | 'coldestStartC' | 'supportNearJointMm' | 'engineSupportMm' | `nearbyMinimumsMm.${NearbyKind}` | `weldTimeFactors.${(typeof ALLOY_FAMILIES)[number]}`;
@@ -24,13 +27,15 @@ export interface ShopSettingsFormProps {
   onSubmit: (values: ShopSettings) => Promise<unknown>;
 }
 
-function NumberInput({ control, name, label, hint, error }: { control: Control<Values>; name: NumberPath; label: string; hint?: string; error?: string }) {
+/** A setting typed as a plain number, or (with `kind`) in the user's units and kept in mm or °C. */
+function NumberInput({ control, name, label, hint, error, kind }: { control: Control<Values>; name: NumberPath; label: string; hint?: string; error?: string; kind?: QuantityKind }) {
+  const units = useUnits();
   return (
     <Controller
       control={control}
       name={name}
       render={({ field: { onChange, onBlur, value, ref } }) => (
-        <NumberField ref={ref} label={label} value={value as number} onChange={onChange} onBlur={onBlur} hint={hint} error={error} />
+        <UnitNumberField ref={ref} label={label} kind={kind} units={units} value={value as number} onChange={onChange} onBlur={onBlur} hint={hint} error={error} />
       )}
     />
   );
@@ -45,7 +50,7 @@ export function ShopSettingsForm({ defaultValues, onSubmit }: ShopSettingsFormPr
     setError,
     reset,
     formState: { errors, isSubmitting },
-  } = useForm<Values, unknown, ShopSettings>({ resolver: zodResolver(shopSettingsSchema), defaultValues });
+  } = useCheckedForm<Values, unknown, ShopSettings>({ resolver: zodResolver(shopSettingsSchema), defaultValues });
 
   const submit = handleSubmit(async (values) => {
     setFailure(undefined);
@@ -119,7 +124,8 @@ export function ShopSettingsForm({ defaultValues, onSubmit }: ShopSettingsFormPr
         <NumberInput
           control={control}
           name="coldestStartC"
-          label="Coldest start (°C)"
+          label="Coldest start"
+          kind="temperature"
           hint="The coldest ambient a system starts from; joints are checked from here to the hottest running state"
           error={errors.coldestStartC?.message}
         />
@@ -131,15 +137,16 @@ export function ShopSettingsForm({ defaultValues, onSubmit }: ShopSettingsFormPr
         <Text variant="caption" tone="muted">
           The system check of every job uses these. The defaults are common practice, with no published source; the vehicle or equipment maker’s rules and local codes come first.
         </Text>
-        <NumberInput control={control} name="supportNearJointMm" label="Support beside a joint within (mm)" hint="On each side of every flex and slip joint" error={errors.supportNearJointMm?.message} />
-        <NumberInput control={control} name="engineSupportMm" label="First support after an engine flange within (mm)" hint="So the turbo or manifold flange does not carry the pipe" error={errors.engineSupportMm?.message} />
+        <NumberInput control={control} name="supportNearJointMm" label="Support beside a joint within" kind="length" hint="On each side of every flex and slip joint" error={errors.supportNearJointMm?.message} />
+        <NumberInput control={control} name="engineSupportMm" label="First support after an engine flange within" kind="length" hint="So the turbo or manifold flange does not carry the pipe" error={errors.engineSupportMm?.message} />
         <Text variant="label">Hot gap to keep, by what sits near the pipe</Text>
         {NEARBY_KINDS.map((kind) => (
           <NumberInput
             key={kind}
             control={control}
             name={`nearbyMinimumsMm.${kind}`}
-            label={`Hot gap to a ${NEARBY_LABELS[kind].toLowerCase()} (mm)`}
+            label={`Hot gap to a ${NEARBY_LABELS[kind].toLowerCase()}`}
+            kind="length"
             error={errors.nearbyMinimumsMm?.[kind]?.message}
           />
         ))}

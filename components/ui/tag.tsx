@@ -20,6 +20,8 @@ const textTone = { neutral: 'muted', warning: 'warning', primary: 'primary', dan
 const styles = StyleSheet.create({
   tag: {
     alignSelf: 'flex-start',
+    // A long part name wraps inside the tag instead of running off a phone's screen.
+    maxWidth: '100%',
     paddingHorizontal: spacing.sm,
     paddingVertical: spacing.xxs,
     borderRadius: radii.sm,

@@ -1,4 +1,4 @@
-import { formatQuantity, type QuantityKind, toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
+import { formatQuantity, inputNumber, type QuantityKind, unitLabel, type UnitSystem } from '../../shared/units';
 
 /** "12.34 mm" / "0.486 in" for an SI value. */
 export const show = (kind: QuantityKind, si: number, units: UnitSystem, decimals?: number) =>
@@ -14,10 +14,9 @@ export function showSigned(kind: QuantityKind, si: number, units: UnitSystem): s
 /** A field's label with its unit: "Length (mm)". */
 export const withUnit = (label: string, kind: QuantityKind, units: UnitSystem) => `${label} (${unitLabel(kind, units)})`;
 
-/** A number for an input box in the chosen system, without float noise (63.5 mm → "2.5"). */
+/** A number for an input box in the chosen system at the trade's precision (466.111 °C typed as 871 °F shows "871"). */
 export function inputText(kind: QuantityKind, si: number, units: UnitSystem): string {
-  const shown = toDisplay(kind, si, units);
-  return String(Number(shown.toFixed(units === 'metric' ? 3 : 4)));
+  return String(inputNumber(kind, si, units));
 }
 
 export function showMoney(amount: number | null, currency: string | null): string {

@@ -1,4 +1,5 @@
-import { useState } from 'react';
+import { type Ref, useState } from 'react';
+import type { TextInput } from 'react-native';
 import { fromDisplay, type QuantityKind, type UnitSystem } from '../../shared/units';
 import { TextField, type TextFieldProps } from '../ui/text-field';
 import { inputText, withUnit } from './format';
@@ -6,6 +7,8 @@ import { inputText, withUnit } from './format';
 export interface UnitNumberFieldProps extends Omit<TextFieldProps, 'value' | 'onChangeText' | 'onChange' | 'label'> {
   /** The label without its unit; the unit of the chosen system is added. */
   label: string;
+  /** Words after the unit, e.g. the part the field belongs to: "Bore (in), DL-FX-1". */
+  labelSuffix?: string;
   /** Absent for plain numbers (a factor), which are shown and kept as typed. */
   kind?: QuantityKind;
   units: UnitSystem;
@@ -13,6 +16,8 @@ export interface UnitNumberFieldProps extends Omit<TextFieldProps, 'value' | 'on
   value: number | undefined;
   /** Receives SI: what is typed in inches or °F is converted before it reaches the form. */
   onChange: (si: number) => void;
+  /** The form's handle on the box, so a failed save can focus it (React 19 passes refs as props). */
+  ref?: Ref<TextInput>;
 }
 
 function parse(text: string): number {
@@ -31,7 +36,7 @@ function same(a: number, b: number): boolean {
  * A number typed in the user's units and kept in SI. What the person typed stays in the box
  * while it stands for the value; a value set from outside (a preset, a unit switch) replaces it.
  */
-export function UnitNumberField({ label, kind, units, value, onChange, ...rest }: UnitNumberFieldProps) {
+export function UnitNumberField({ label, labelSuffix = '', kind, units, value, onChange, ref, ...rest }: UnitNumberFieldProps) {
   const [typed, setTyped] = useState<{ text: string; units: UnitSystem } | null>(null);
   const parsed = typed ? parse(typed.text) : Number.NaN;
   const toSi = (n: number) => (kind ? fromDisplay(kind, n, units) : n);
@@ -42,7 +47,8 @@ export function UnitNumberField({ label, kind, units, value, onChange, ...rest }
   const shown = inSync ? typed.text : blank(value) ? '' : kind ? inputText(kind, value!, units) : String(value);
   return (
     <TextField
-      label={kind ? withUnit(label, kind, units) : label}
+      ref={ref}
+      label={`${kind ? withUnit(label, kind, units) : label}${labelSuffix}`}
       value={shown}
       onChangeText={(text) => {
         setTyped({ text, units });

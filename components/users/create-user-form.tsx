@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import { isApiError, messageOf } from '../../hooks/api-client';
@@ -11,6 +11,7 @@ import { SegmentedControl } from '../ui/segmented-control';
 import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { ROLE_OPTIONS } from './role-options';
+import { useCheckedForm } from '../forms/use-checked-form';
 
 const FIELD_NAMES = ['name', 'email', 'role', 'password'] as const;
 
@@ -28,7 +29,7 @@ export function CreateUserForm({ onSubmit }: CreateUserFormProps) {
     reset,
     setError,
     formState: { errors, isSubmitting },
-  } = useForm<CreateUserInput>({
+  } = useCheckedForm<CreateUserInput>({
     resolver: zodResolver(createUserSchema),
     defaultValues: { name: '', email: '', role: 'fabricator', password: '' },
   });

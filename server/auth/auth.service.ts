@@ -32,12 +32,20 @@ export class AuthService {
     if (!user || !ok || !user.active) {
       const { blockedNow, failures } = await this.limiter.failed(attempt);
       if (blockedNow && user?.active) await this.tellOwner(user, failures);
+      // Only someone who knows the password learns that the account exists and is switched off.
+      if (user && ok) throw new AppError(403, 'account_inactive', await this.inactiveMessage());
       throw new AppError(401, 'invalid_credentials', 'The e-mail or password is not right.');
     }
     await this.limiter.succeeded(attempt);
     await this.addresses.remember(user.id, address);
     const session = await this.auth.createSession(user.id, {});
     return { user: toPublicUser(user), sessionId: session.id };
+  }
+
+  private async inactiveMessage(): Promise<string> {
+    const admins = (await this.users.activeAdmins()).map((a) => a.name);
+    const whom = admins.length > 0 ? `your shop's Dilato admin (${admins.join(' or ')})` : "your shop's Dilato admin";
+    return `This account is switched off, so it cannot sign in. Ask ${whom} to switch it back on.`;
   }
 
   /** Once, when a strange address is shut out of the account; a mail failure never changes the answer. */

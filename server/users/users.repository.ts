@@ -20,6 +20,10 @@ export class UsersRepository {
     return this.repo.find({ order: { active: 'DESC', name: 'ASC' } });
   }
 
+  activeAdmins() {
+    return this.repo.find({ where: { role: 'admin', active: true }, order: { name: 'ASC' } });
+  }
+
   countActiveAdmins() {
     return this.repo.countBy({ role: 'admin', active: true });
   }

@@ -1,6 +1,7 @@
 import { angularEquivalentMm, EJMA_RELATION_NOTE, ESTIMATED_MEAN_DIAMETER_FACTOR, lateralEquivalentMm } from './ejma';
 import { TRAVEL_SHARE_NOTE } from './design-basis';
 import type { EngineWarning, FlexCandidateResult, FlexPart, FlexResult, FlexState, FlexStateUse } from './types';
+import { joinPhrases, type Phrase, phrase, quantity } from '../units';
 
 /**
  * A flex part's bore fits the tube when it is within this many mm of the tube OD either way.
@@ -25,6 +26,9 @@ export interface FlexDuty {
 }
 
 const fmt = (x: number) => (Math.round(x * 100) / 100).toString();
+const len = (mm: number) => quantity('length', mm);
+const move = (mm: number) => quantity('smallLength', mm);
+const temp = (c: number) => quantity('temperature', c);
 const pct = (x: number) => `${Math.round(x * 100)} %`;
 /** Uses past this many times a rating are reported as this: the part is far out of range either way, and the figure stays finite. */
 export const USE_CAP = 10;
@@ -85,15 +89,15 @@ export function choosePreset(hotGrowthMm: number, range: { lo: number; hi: numbe
 }
 
 export function assessFlexPart(part: FlexPart, duty: FlexDuty): FlexCandidateResult {
-  const reasons: string[] = [];
+  const reasons: Phrase[] = [];
   const warnings: EngineWarning[] = [];
   const share = duty.travelShare;
   const dm = meanDiameter(part);
   if (Math.abs(part.boreMm - duty.odMm) > FLEX_BORE_FIT_TOLERANCE_MM) {
-    reasons.push(`Bore ${fmt(part.boreMm)} mm does not fit a ${fmt(duty.odMm)} mm tube (±${FLEX_BORE_FIT_TOLERANCE_MM} mm)`);
+    reasons.push(phrase`Bore ${len(part.boreMm)} does not fit a ${len(duty.odMm)} tube (±${move(FLEX_BORE_FIT_TOLERANCE_MM)})`);
   }
   if (part.maxTempC < duty.tempAtFlexC) {
-    reasons.push(`Rated to ${fmt(part.maxTempC)} °C, below the ${fmt(duty.tempAtFlexC)} °C where it sits`);
+    reasons.push(phrase`Rated to ${temp(part.maxTempC)}, below the ${temp(duty.tempAtFlexC)} where it sits`);
   }
   let hot = duty.states[0];
   let lateral = 0;
@@ -105,36 +109,36 @@ export function assessFlexPart(part: FlexPart, duty: FlexDuty): FlexCandidateRes
   }
   const lateralUse = shareOf(lateral, part.lateralOffsetMm);
   const angularUse = shareOf(rotation, part.ratedAngularDeg);
-  if (lateralUse > share) reasons.push(`Lateral offset ${fmt(lateral)} mm is ${pct(lateralUse)} of its ${fmt(part.lateralOffsetMm)} mm rating (at most ${pct(share)})`);
-  if (angularUse > share) reasons.push(`Rotation ${fmt(rotation)}° is ${pct(angularUse)} of its ${fmt(part.ratedAngularDeg)}° rating (at most ${pct(share)})`);
+  if (lateralUse > share) reasons.push(phrase`Lateral offset ${len(lateral)} is ${pct(lateralUse)} of its ${len(part.lateralOffsetMm)} rating (at most ${pct(share)})`);
+  if (angularUse > share) reasons.push(phrase`Rotation ${fmt(rotation)}° is ${pct(angularUse)} of its ${fmt(part.ratedAngularDeg)}° rating (at most ${pct(share)})`);
 
   const preset = choosePreset(hot.axialGrowthMm, presetRange(part, dm.mm, duty));
   const uses = duty.states.map((s) => stateUse(part, dm.mm, s, preset ?? 0));
   if (preset === null) {
     const range = Math.max(...duty.states.map((s) => s.axialGrowthMm)) - Math.min(...duty.states.map((s) => s.axialGrowthMm));
     reasons.push(
-      `Needs ${fmt(range)} mm of axial travel from the coldest start to hot, plus the lateral and angular equivalent; ${pct(share)} of its ${fmt(part.ratedAxialCompressionMm)} mm compression and ${fmt(part.ratedAxialExtensionMm)} mm extension is not enough at any pre-set`,
+      phrase`Needs ${move(range)} of axial travel from the coldest start to hot, plus the lateral and angular equivalent; ${pct(share)} of its ${move(part.ratedAxialCompressionMm)} compression and ${move(part.ratedAxialExtensionMm)} extension is not enough at any pre-set`,
     );
   } else {
     for (const u of uses) {
       if (u.compressionUse > share + 1e-9 || u.extensionUse > share + 1e-9) {
-        reasons.push(`At the ${u.state} state it would use ${pct(Math.max(u.compressionUse, u.extensionUse))} of its rated travel (at most ${pct(share)})`);
+        reasons.push([`At the ${u.state} state it would use ${pct(Math.max(u.compressionUse, u.extensionUse))} of its rated travel (at most ${pct(share)})`]);
       }
     }
   }
   if (part.purpose !== 'thermal_bellows') {
     warnings.push({
       code: 'FLEX_NOT_FOR_GROWTH',
-      message: `${part.name} is a ${PURPOSE_LABELS[part.purpose]}, not meant to take thermal growth: use a thermal bellows for the growth`,
+      message: [`${part.name} is a ${PURPOSE_LABELS[part.purpose]}, not meant to take thermal growth: use a thermal bellows for the growth`],
     });
   }
   if (duty.heatCycles !== null) {
     if (part.ratedCycles === null) {
-      warnings.push({ code: 'FLEX_CYCLES_NOT_RATED', message: `${part.name} has no cycle rating: ask its maker whether it is rated for ${duty.heatCycles} heat cycles` });
+      warnings.push({ code: 'FLEX_CYCLES_NOT_RATED', message: [`${part.name} has no cycle rating: ask its maker whether it is rated for ${duty.heatCycles} heat cycles`] });
     } else if (duty.heatCycles > part.ratedCycles) {
       warnings.push({
         code: 'FLEX_CYCLES_OVER_RATING',
-        message: `${duty.heatCycles} heat cycles exceed the ${part.ratedCycles} cycles ${part.name} is rated for: expect fatigue cracks; choose a part rated for the cycles`,
+        message: [`${duty.heatCycles} heat cycles exceed the ${part.ratedCycles} cycles ${part.name} is rated for: expect fatigue cracks; choose a part rated for the cycles`],
       });
     }
   }
@@ -166,14 +170,14 @@ function preference(a: FlexPart, b: FlexPart): number {
 export function sizeFlex(duty: FlexDuty & { coldestAmbientC: number; tempBasis: 'location' | 'peak' }, parts: FlexPart[], partId?: string): FlexResult {
   const assessed = parts.map((p) => ({ part: p, result: assessFlexPart(p, duty) }));
   let chosen: (typeof assessed)[number] | undefined;
-  let noneFitsReason: string | null = null;
+  let noneFitsReason: Phrase | null = null;
   if (partId !== undefined) {
     chosen = assessed.find((a) => a.part.id === partId);
-    if (!chosen) noneFitsReason = 'The flex part picked for this run is no longer in the catalogue: pick another';
-    else if (!chosen.result.fits) noneFitsReason = `${chosen.part.name} does not fit: ${chosen.result.reasons.join('; ')}`;
+    if (!chosen) noneFitsReason = ['The flex part picked for this run is no longer in the catalogue: pick another'];
+    else if (!chosen.result.fits) noneFitsReason = phrase`${chosen.part.name} does not fit: ${joinPhrases(chosen.result.reasons, '; ')}`;
   } else {
     chosen = assessed.filter((a) => a.result.fits).sort((a, b) => preference(a.part, b.part))[0];
-    if (!chosen) noneFitsReason = parts.length > 0 ? `None of the ${parts.length} flex part(s) fits: see each part's reasons` : 'There are no flex parts in the catalogue';
+    if (!chosen) noneFitsReason = [parts.length > 0 ? `None of the ${parts.length} flex part(s) fits: see each part's reasons` : 'There are no flex parts in the catalogue'];
   }
   const growths = duty.states.map((s) => s.axialGrowthMm);
   return {

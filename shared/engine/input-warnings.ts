@@ -1,9 +1,10 @@
+import { phrase, quantity } from '../units';
 import type { EngineWarning, Segment } from './types';
 
 /** A jump larger than this between one segment's end and the next one's start is worth a word. */
 export const TEMPERATURE_STEP_WARN_C = 1;
 
-const r = (x: number) => Math.round(x * 10) / 10;
+const temp = (c: number) => quantity('temperature', c);
 
 /** Inputs that compute but are likely mistakes, or change what the figures mean. */
 export function inputWarnings(segments: Segment[], installTempC: number, growthMm: number): EngineWarning[] {
@@ -15,8 +16,8 @@ export function inputWarnings(segments: Segment[], installTempC: number, growthM
       code: growthMm < 0 ? 'RUN_SHRINKS' : 'COLDER_THAN_INSTALL',
       message:
         growthMm < 0
-          ? `The run runs colder than its ${r(installTempC)} °C install temperature, so it shrinks: the growth is negative (${r(growthMm * 100) / 100} mm). Check the install and running temperatures`
-          : `Part of the run (down to ${r(coldest)} °C) is colder than its ${r(installTempC)} °C install temperature and shrinks there; the growth is the net of both`,
+          ? phrase`The run runs colder than its ${temp(installTempC)} install temperature, so it shrinks: the growth is negative (${quantity('smallLength', growthMm)}). Check the install and running temperatures`
+          : phrase`Part of the run (down to ${temp(coldest)}) is colder than its ${temp(installTempC)} install temperature and shrinks there; the growth is the net of both`,
     });
   }
   for (let i = 1; i < segments.length; i++) {
@@ -24,7 +25,7 @@ export function inputWarnings(segments: Segment[], installTempC: number, growthM
     if (Math.abs(step) > TEMPERATURE_STEP_WARN_C) {
       warnings.push({
         code: 'TEMPERATURE_STEP',
-        message: `Segment ${i} ends at ${r(segments[i - 1].endTempC)} °C and segment ${i + 1} starts at ${r(segments[i].startTempC)} °C, a step of ${r(Math.abs(step))} °C: temperature along one tube does not jump, so check both values`,
+        message: phrase`Segment ${i} ends at ${temp(segments[i - 1].endTempC)} and segment ${i + 1} starts at ${temp(segments[i].startTempC)}, a step of ${quantity('temperatureDelta', Math.abs(step))}: temperature along one tube does not jump, so check both values`,
       });
     }
   }

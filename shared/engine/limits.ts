@@ -1,3 +1,4 @@
+import { phrase, phraseOfText, quantity } from '../units';
 import type { AlloyData, EngineWarning, LimitResult, LimitStatus, Segment } from './types';
 
 /**
@@ -41,7 +42,7 @@ export function warningRangesHit(alloy: Pick<AlloyData, 'warningRanges'>, segmen
   const hits: EngineWarning[] = [];
   for (const w of alloy.warningRanges ?? []) {
     const touched = segments.some((s) => Math.max(s.startTempC, s.endTempC) >= w.fromC && Math.min(s.startTempC, s.endTempC) <= w.toC);
-    if (touched) hits.push({ code: w.code, message: w.message });
+    if (touched) hits.push({ code: w.code, message: phraseOfText(w.message) });
   }
   return hits;
 }
@@ -51,7 +52,7 @@ export function limitWarnings(limit: LimitResult, peakC: number): EngineWarning[
     return [
       {
         code: 'TEMP_OVER_LIMIT',
-        message: `Peak ${round(peakC)} °C is ${round(-limit.marginC)} °C above the alloy's ${limit.governedBy} limit of ${limit.governingC} °C`,
+        message: phrase`Peak ${temp(peakC)} is ${delta(-limit.marginC)} above the alloy's ${limit.governedBy} limit of ${temp(limit.governingC)}`,
       },
     ];
   }
@@ -59,13 +60,12 @@ export function limitWarnings(limit: LimitResult, peakC: number): EngineWarning[
     return [
       {
         code: 'TEMP_NEAR_LIMIT',
-        message: `Peak ${round(peakC)} °C is within ${limit.cautionBandC} °C of the alloy's ${limit.governedBy} limit of ${limit.governingC} °C`,
+        message: phrase`Peak ${temp(peakC)} is within ${delta(limit.cautionBandC)} of the alloy's ${limit.governedBy} limit of ${temp(limit.governingC)}`,
       },
     ];
   }
   return [];
 }
 
-function round(x: number): number {
-  return Math.round(x * 10) / 10;
-}
+const temp = (c: number) => quantity('temperature', c);
+const delta = (c: number) => quantity('temperatureDelta', c);

@@ -2,6 +2,7 @@ import { EngineInputError } from './errors';
 import { type StrainCurve, strainAt } from './expansion';
 import { interpolateOrNull, type Point, sortedPoints } from './tables';
 import type { AlloyData, EngineWarning, RestraintResult, RestraintVerdict, Segment } from './types';
+import { phrase, quantity } from '../units';
 
 /**
  * The run may be left rigidly held only while the restrained stress stays at or below this
@@ -108,7 +109,7 @@ export function restraint(c: StrainCurve, s: StrengthTables, segments: Segment[]
   if (topT > eMax) {
     warnings.push({
       code: 'MODULUS_DATA_RANGE',
-      message: `The alloy's modulus data stop at ${eMax} °C, below the run's ${topT} °C: the ${eMax} °C value is used above it, which overstates the restrained stress`,
+      message: phrase`The alloy's modulus data stop at ${quantity('temperature', eMax)}, below the run's ${quantity('temperature', topT)}: the ${quantity('temperature', eMax)} value is used above it, which overstates the restrained stress`,
     });
   }
   // One pass, no per-point objects: this runs on every keystroke of the run editor.
@@ -148,7 +149,7 @@ export function restraint(c: StrainCurve, s: StrengthTables, segments: Segment[]
   if (topT > lastYield.t) {
     warnings.push({
       code: 'YIELD_DATA_RANGE',
-      message: `The alloy's yield data stop at ${lastYield.t} °C, below the run's ${topT} °C: the stress is judged against yield only up to ${lastYield.t} °C`,
+      message: phrase`The alloy's yield data stop at ${quantity('temperature', lastYield.t)}, below the run's ${quantity('temperature', topT)}: the stress is judged against yield only up to ${quantity('temperature', lastYield.t)}`,
     });
   }
   const governing = worstI < 0 ? null : { stressMPa: stresses[worstI], tempC: temps[worstI], yieldMPa: worstY, ratio: worst };

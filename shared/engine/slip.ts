@@ -9,6 +9,7 @@ import {
   TUBE_TOLERANCE_NOTE,
 } from './tube-tolerance';
 import type { DesignBasis, JointCheck, SlipInput, SlipResult, SlipState } from './types';
+import { phrase, quantity } from '../units';
 
 /** Minimum engagement as a multiple of the tube diameter. Common practice, no published source. */
 export const DEFAULT_MIN_ENGAGEMENT_OD_MULTIPLE = 1;
@@ -27,7 +28,10 @@ export interface SlipMovement {
   design: DesignBasis;
 }
 
-const f = (x: number, d = 2) => (Math.round(x * 10 ** d) / 10 ** d).toString();
+/** Radial fits to 0.001 mm (0.0001 in), gaps and engagements to 0.1 mm, movements to 0.01 mm. */
+const fit = (mm: number) => quantity('fit', mm);
+const len = (mm: number) => quantity('length', mm);
+const travel = (mm: number) => quantity('smallLength', mm);
 
 /** The tolerance the joint is judged with: the entered one, else the tube standard's for the spigot OD. */
 export function slipTolerance(input: SlipInput, spigotOdMm: number): number | null {
@@ -87,35 +91,35 @@ export function sizeSlip(input: SlipInput, materials: SlipMaterials, move: SlipM
       code: 'fit_window',
       ok: windowFits,
       message: windowFits
-        ? `The ±${f(toleranceMm, 3)} mm tolerance and scale spread the radial clearance over ${f(band, 3)} mm, within the ${f(minRadial, 3)}–${f(maxRadial, 3)} mm window`
-        : `No cold clearance can work: the ±${f(toleranceMm, 3)} mm tolerance and scale spread the radial clearance over ${f(band, 3)} mm, wider than the ${f(minRadial, 3)}–${f(maxRadial, 3)} mm window. Size the sleeve to the spigot (expand or machine it) and enter the tolerance of the sized fit`,
+        ? phrase`The ±${fit(toleranceMm)} tolerance and scale spread the radial clearance over ${fit(band)}, within the ${fit(minRadial)}–${fit(maxRadial)} window`
+        : phrase`No cold clearance can work: the ±${fit(toleranceMm)} tolerance and scale spread the radial clearance over ${fit(band)}, wider than the ${fit(minRadial)}–${fit(maxRadial)} window. Size the sleeve to the spigot (expand or machine it) and enter the tolerance of the sized fit`,
     },
     {
       code: 'assembles',
       ok: install.tightestRadialMm >= 0,
       message:
         install.tightestRadialMm >= 0
-          ? 'Goes together at install even with both members at the tight end of their tolerance'
-          : `May not go together: at the tight end of the ±${f(toleranceMm, 3)} mm tolerance the spigot is ${f(-2 * install.tightestRadialMm, 3)} mm larger than the bore`,
+          ? ['Goes together at install even with both members at the tight end of their tolerance']
+          : phrase`May not go together: at the tight end of the ±${fit(toleranceMm)} tolerance the spigot is ${fit(-2 * install.tightestRadialMm)} larger than the bore`,
     },
     ...[hot, cold].flatMap((s): JointCheck[] => {
-      const where = s.state === 'hot' ? 'Hot,' : `At the coldest start (${f(coldC, 0)} °C),`;
+      const where = s.state === 'hot' ? phrase`Hot,` : phrase`At the coldest start (${quantity('temperature', coldC)}),`;
       return [
         {
           code: `${s.state}_min_clearance`,
           ok: s.tightestRadialMm >= minRadial,
           message:
             s.tightestRadialMm >= minRadial
-              ? `${where} the tightest fit keeps ${f(s.tightestRadialMm, 3)} mm radial clearance (at least ${f(minRadial, 3)} mm): it slides`
-              : `${where} the tightest fit keeps ${f(s.tightestRadialMm, 3)} mm radial clearance, under the ${f(minRadial, 3)} mm minimum: it may seize`,
+              ? phrase`${where} the tightest fit keeps ${fit(s.tightestRadialMm)} radial clearance (at least ${fit(minRadial)}): it slides`
+              : phrase`${where} the tightest fit keeps ${fit(s.tightestRadialMm)} radial clearance, under the ${fit(minRadial)} minimum: it may seize`,
         },
         {
           code: `${s.state}_max_clearance`,
           ok: s.loosestRadialMm <= maxRadial,
           message:
             s.loosestRadialMm <= maxRadial
-              ? `${where} the loosest fit opens to ${f(s.loosestRadialMm, 3)} mm radial clearance (at most ${f(maxRadial, 3)} mm)`
-              : `${where} the loosest fit opens to ${f(s.loosestRadialMm, 3)} mm radial clearance, over the ${f(maxRadial, 3)} mm maximum: it leaks and rattles`,
+              ? phrase`${where} the loosest fit opens to ${fit(s.loosestRadialMm)} radial clearance (at most ${fit(maxRadial)})`
+              : phrase`${where} the loosest fit opens to ${fit(s.loosestRadialMm)} radial clearance, over the ${fit(maxRadial)} maximum: it leaks and rattles`,
         },
       ];
     }),
@@ -124,18 +128,18 @@ export function sizeSlip(input: SlipInput, materials: SlipMaterials, move: SlipM
       ok: input.coldAxialGapMm >= requiredGap,
       message:
         input.coldAxialGapMm >= requiredGap
-          ? `The ${f(input.coldAxialGapMm, 1)} mm gap takes the ${f(closure)} mm hot closure within ${Math.round(share * 100)} % of its length`
+          ? phrase`The ${len(input.coldAxialGapMm)} gap takes the ${travel(closure)} hot closure within ${Math.round(share * 100)} % of its length`
           : bottomsOut
-            ? `Bottoms out: the ${f(closure)} mm hot closure is more than the ${f(input.coldAxialGapMm, 1)} mm gap; leave at least ${f(requiredGap, 1)} mm`
-            : `The ${f(input.coldAxialGapMm, 1)} mm gap is short: the ${f(closure)} mm hot closure needs ${f(requiredGap, 1)} mm at ${Math.round(share * 100)} % use`,
+            ? phrase`Bottoms out: the ${travel(closure)} hot closure is more than the ${len(input.coldAxialGapMm)} gap; leave at least ${len(requiredGap)}`
+            : phrase`The ${len(input.coldAxialGapMm)} gap is short: the ${travel(closure)} hot closure needs ${len(requiredGap)} at ${Math.round(share * 100)} % use`,
     },
     {
       code: 'engagement',
       ok: input.coldEngagementMm >= engagementNeeded,
       message:
         input.coldEngagementMm >= engagementNeeded
-          ? `Keeps ${f(coldestEngagement, 1)} mm engaged at the coldest start (at least ${f(minEngagement, 1)} mm, with the draw-out at ${Math.round(share * 100)} % use)`
-          : `Engage at least ${f(engagementNeeded, 1)} mm at install: the spigot draws out ${f(drawOut)} mm at the coldest start and at least ${f(minEngagement, 1)} mm must stay engaged`,
+          ? phrase`Keeps ${len(coldestEngagement)} engaged at the coldest start (at least ${len(minEngagement)}, with the draw-out at ${Math.round(share * 100)} % use)`
+          : phrase`Engage at least ${len(engagementNeeded)} at install: the spigot draws out ${travel(drawOut)} at the coldest start and at least ${len(minEngagement)} must stay engaged`,
     },
   ];
   return {

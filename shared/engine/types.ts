@@ -1,4 +1,5 @@
 /** Plain data the engine works on. SI inside: mm, °C, MPa, GPa, kg. */
+import type { Phrase } from '../units';
 
 export interface AlloyData {
   /** Reference temperature of the mean CTE table. */
@@ -114,9 +115,10 @@ export interface RunInput {
   slip?: SlipInput;
 }
 
+/** Words for people with the quantities left as values: the screen words them in the reader's units (`wordPhrase`). */
 export interface EngineWarning {
   code: string;
-  message: string;
+  message: Phrase;
 }
 
 export interface CurvePoint {
@@ -187,7 +189,7 @@ export interface RestraintResult {
 export interface JointCheck {
   code: string;
   ok: boolean;
-  message: string;
+  message: Phrase;
 }
 
 /** Movement across a flex at one state, from the install position. */
@@ -217,7 +219,7 @@ export interface FlexCandidateResult {
   purpose: FlexPurpose;
   fits: boolean;
   /** Why it does not fit (empty when it fits). */
-  reasons: string[];
+  reasons: Phrase[];
   /** Cold stretch to set at install (negative = compressed); null when no pre-set keeps the part within its share of travel. */
   presetMm: number | null;
   meanDiameterMm: number;
@@ -248,7 +250,7 @@ export interface FlexResult {
   chosenBy: 'fabricator' | 'engine' | null;
   candidates: FlexCandidateResult[];
   /** Set when no part can be used. */
-  noneFitsReason: string | null;
+  noneFitsReason: Phrase | null;
 }
 
 /** Radial clearance of a slip joint at one state. */

@@ -1,4 +1,5 @@
 import type { NearbyItem } from '../schemas/jobs';
+import { type Phrase, phrase, quantity } from '../units';
 import { FIRE_RISK_KINDS, NEARBY_LABELS, type NearbyKind } from './nearby';
 import { growthPerMetreAt, runMovement, tempAt } from './run-movement';
 import type { ComputedRun } from './support-plan';
@@ -16,10 +17,10 @@ export interface NearbyCheck {
   hotGapMm: number;
   minimumMm: number;
   ok: boolean;
-  message: string;
+  message: Phrase;
 }
 
-const r1 = (x: number) => (Math.round(x * 10) / 10).toFixed(1);
+const len = (mm: number) => quantity('length', mm);
 
 /**
  * The pipe closes on an item beside it by its radial growth (half the OD's growth at the
@@ -46,7 +47,7 @@ export function checkNearby(run: ComputedRun, index: number, minimums: Record<Ne
   const name = item.label ? `${item.label} (${NEARBY_LABELS[item.kind].toLowerCase()})` : NEARBY_LABELS[item.kind];
   const fire = FIRE_RISK_KINDS.includes(item.kind) ? '. Fuel and brake lines near a hot exhaust skin are a fire risk' : '';
   const message = ok
-    ? `${name} at ${r1(item.atMm)} mm keeps ${r1(hot)} mm hot (at least ${r1(minimum)} mm)`
-    : `${name} at ${r1(item.atMm)} mm keeps only ${r1(hot)} mm hot, under the ${r1(minimum)} mm minimum: fit a heat shield or reroute it${fire}`;
+    ? phrase`${name} at ${len(item.atMm)} keeps ${len(hot)} hot (at least ${len(minimum)})`
+    : phrase`${name} at ${len(item.atMm)} keeps only ${len(hot)} hot, under the ${len(minimum)} minimum: fit a heat shield or reroute it${fire}`;
   return { runId: run.id, runName: run.name, index, item, tempC, closingMm: closing, hotGapMm: hot, minimumMm: minimum, ok, message };
 }

@@ -1,4 +1,5 @@
 import type { RunView } from '../schemas/jobs';
+import { type Phrase, phrase, quantity } from '../units';
 import { fixedPointLabel, fixedPointRole } from './fixed-points';
 import { checkNearby, type NearbyCheck } from './nearby-check';
 import { NEARBY_MINIMUMS_NOTE } from './nearby';
@@ -10,7 +11,8 @@ export interface SystemFinding {
   code: 'STRETCH_WITHOUT_JOINT' | 'ENGINE_CARRIES_WEIGHT' | 'JOINT_UNSUPPORTED' | 'FLEX_POSITION_MISSING' | 'NEARBY_TOO_CLOSE' | 'RUN_NOT_CHECKED';
   severity: 'danger' | 'warning';
   runId: string | null;
-  message: string;
+  /** Worded at the screen in the reader's units (`wordPhrase`). */
+  message: Phrase;
 }
 
 /** The job as a system: its supports and what they must allow, clearances, and what is wrong. */
@@ -22,7 +24,8 @@ export interface SystemCheck {
 }
 
 const HELD = ['engine', 'anchor'];
-const f1 = (x: number) => (Math.round(x * 10) / 10).toFixed(1);
+const len = (mm: number) => quantity('length', mm);
+const kg = (m: number) => quantity('mass', m, 1);
 const isHeld = (id: RunView['startFixing']) => HELD.includes(fixedPointRole(id));
 const takesGrowth = (run: RunView) =>
   run.joint.type !== 'none' || ['joint', 'free'].includes(fixedPointRole(run.startFixing)) || ['joint', 'free'].includes(fixedPointRole(run.endFixing));
@@ -49,7 +52,7 @@ function stretches(runs: ComputedRun[]): SystemFinding[] {
       code: 'STRETCH_WITHOUT_JOINT',
       severity: 'danger',
       runId: stretch[0].id,
-      message: `From the ${fixedPointLabel(stretch[0].startFixing).toLowerCase()} to the ${fixedPointLabel(run.endFixing).toLowerCase()} (${names}) the pipe is held at both ends with no joint: its ${f1(growth)} mm of growth has nowhere to go and cracks welds or brackets. Fit a flex section or a slip joint, or let one end slide`,
+      message: phrase`From the ${fixedPointLabel(stretch[0].startFixing).toLowerCase()} to the ${fixedPointLabel(run.endFixing).toLowerCase()} (${names}) the pipe is held at both ends with no joint: its ${len(growth)} of growth has nowhere to go and cracks welds or brackets. Fit a flex section or a slip joint, or let one end slide`,
     });
   });
   return out;
@@ -67,7 +70,7 @@ function engineLoad(run: ComputedRun, fromStart: boolean, basis: SystemBasis): S
       code: 'ENGINE_CARRIES_WEIGHT',
       severity: 'danger',
       runId: run.id,
-      message: `Nothing in ${run.name} carries the pipe: its ${f1(run.result.massKg)} kg hangs on the ${flange}. Add a sliding support or hanger within ${f1(basis.engineSupportMm)} mm of it`,
+      message: phrase`Nothing in ${run.name} carries the pipe: its ${kg(run.result.massKg)} hangs on the ${flange}. Add a sliding support or hanger within ${len(basis.engineSupportMm)} of it`,
     };
   }
   if (first <= basis.engineSupportMm) return null;
@@ -78,7 +81,7 @@ function engineLoad(run: ComputedRun, fromStart: boolean, basis: SystemBasis): S
     code: 'ENGINE_CARRIES_WEIGHT',
     severity: 'warning',
     runId: run.id,
-    message: `The first support of ${run.name} is ${f1(first)} mm from the ${flange} (more than ${f1(basis.engineSupportMm)} mm): the flange carries about ${f1(carried)} kg of pipe. Add a support nearer the ${flange}`,
+    message: phrase`The first support of ${run.name} is ${len(first)} from the ${flange} (more than ${len(basis.engineSupportMm)}): the flange carries about ${kg(carried)} of pipe. Add a support nearer the ${flange}`,
   };
 }
 
@@ -89,7 +92,7 @@ function jointSupports(runs: ComputedRun[], i: number, basis: SystemBasis): Syst
   const what = run.joint.type === 'flex' ? 'flex section' : 'slip joint';
   const j = jointPositionMm(run, length);
   if (j === null) {
-    return [{ code: 'FLEX_POSITION_MISSING', severity: 'warning', runId: run.id, message: `Give the position of the flex section in ${run.name} to check the supports either side of it` }];
+    return [{ code: 'FLEX_POSITION_MISSING', severity: 'warning', runId: run.id, message: [`Give the position of the flex section in ${run.name} to check the supports either side of it`] }];
   }
   const d = basis.supportNearJointMm;
   const here = carryingPositions(run, length, true);
@@ -108,7 +111,7 @@ function jointSupports(runs: ComputedRun[], i: number, basis: SystemBasis): Syst
       code: 'JOINT_UNSUPPORTED',
       severity: 'warning',
       runId: run.id,
-      message: `No support within ${f1(d)} mm on the ${side === 'start' ? 'start' : 'end'} side of the ${what} in ${run.name} (at ${f1(j)} mm): support both sides so the joint never carries weight`,
+      message: phrase`No support within ${len(d)} on the ${side === 'start' ? 'start' : 'end'} side of the ${what} in ${run.name} (at ${len(j)}): support both sides so the joint never carries weight`,
     });
   }
   return out;
@@ -119,7 +122,7 @@ export function checkSystem(runs: RunView[], basis: SystemBasis): SystemCheck {
   const computed = runs.filter((r): r is ComputedRun => r.result !== null);
   const findings: SystemFinding[] = runs
     .filter((r) => r.result === null)
-    .map((r) => ({ code: 'RUN_NOT_CHECKED', severity: 'warning', runId: r.id, message: `${r.name} has no result, so its supports and clearances are not checked` }));
+    .map((r) => ({ code: 'RUN_NOT_CHECKED', severity: 'warning', runId: r.id, message: [`${r.name} has no result, so its supports and clearances are not checked`] }));
   findings.push(...stretches(computed));
   computed.forEach((run, i) => {
     // A run between two engine flanges (manifold to turbo) is part of the engine assembly; the rule is for the system leaving it.

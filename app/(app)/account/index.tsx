@@ -7,9 +7,11 @@ import { UnitSwitch } from '../../../components/units/unit-switch';
 import { spacing } from '../../../constants/theme';
 import { useSessionQuery } from '../../../hooks/use-session';
 import { ROLE_LABELS } from '../../../shared/schemas/auth';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function AccountScreen() {
   const { data: me } = useSessionQuery();
+  useScreenTitle('Your settings');
   if (!me) return <LoadingState />;
   return (
     <Screen narrow>

@@ -3,8 +3,9 @@ import { useState } from 'react';
 import { CautionsNote } from '../../../components/ui/cautions-note';
 import { MAX_COMPARE } from '../../../components/alloys/compare-bar';
 import { CompareView } from '../../../components/alloys/compare-view';
-import { CATALOGUE_UNITS } from '../../../components/alloys/format';
-import { NumberField } from '../../../components/ui/number-field';
+import { formatTemp } from '../../../components/alloys/format';
+import { UnitNumberField } from '../../../components/units/unit-number-field';
+import { useUnits } from '../../../hooks/use-units';
 import { TextLink } from '../../../components/ui/text-link';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorBanner } from '../../../components/ui/error-banner';
@@ -13,17 +14,19 @@ import { Screen } from '../../../components/ui/screen';
 import { Text } from '../../../components/ui/text';
 import { messageOf } from '../../../hooks/api-client';
 import { useAlloyQueries } from '../../../hooks/use-alloys';
-import { fromDisplay, toDisplay, unitLabel } from '../../../shared/units';
+import { growthBasisWords } from '../../../shared/units';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 const DEFAULT_AT_C = 800;
 
 export default function CompareScreen() {
   const { ids: raw } = useLocalSearchParams<{ ids?: string }>();
   const ids = [...new Set((raw ?? '').split(',').filter(Boolean))].slice(0, MAX_COMPARE);
-  const units = CATALOGUE_UNITS;
+  const units = useUnits();
   const queries = useAlloyQueries(ids);
-  const [at, setAt] = useState(toDisplay('temperature', DEFAULT_AT_C, units));
-  const atC = Number.isFinite(at) ? fromDisplay('temperature', at, units) : DEFAULT_AT_C;
+  // Kept in °C, so switching units mid-way changes the words, not the temperature.
+  const [at, setAt] = useState<number>(DEFAULT_AT_C);
+  const atC = Number.isFinite(at) ? at : DEFAULT_AT_C;
 
   const failed = queries.find((q) => q.isError);
   const loading = queries.some((q) => q.isPending);
@@ -33,6 +36,7 @@ export default function CompareScreen() {
     return v ? [v] : [];
   });
 
+  useScreenTitle('Compare alloys', 'Alloy catalogue');
   return (
     <Screen wide>
       <TextLink href="/alloys" label="← Catalogue" accessibilityLabel="Back to the catalogue" />
@@ -47,12 +51,14 @@ export default function CompareScreen() {
         <ErrorBanner title="An alloy did not load" message={messageOf(failed.error)} onRetry={() => queries.forEach((q) => void q.refetch())} />
       ) : (
         <>
-          <NumberField
-            label={`Compare growth at (${unitLabel('temperature', units)})`}
+          <UnitNumberField
+            label="Compare growth at"
+            kind="temperature"
+            units={units}
             value={at}
             onChange={setAt}
             error={Number.isFinite(at) ? undefined : 'Enter a temperature'}
-            hint="Each tube heated from 20 °C, per metre."
+            hint={`Each tube heated from ${formatTemp(20, units)}, ${growthBasisWords(units)}.`}
           />
           <CompareView alloys={versions} atC={atC} units={units} />
           <CautionsNote />

@@ -6,7 +6,9 @@ import { AlloyFilters, DEFAULT_FILTERS, toListParams } from '../../../components
 import { AlloyTable } from '../../../components/alloys/alloy-table';
 import { CompareBar, MAX_COMPARE } from '../../../components/alloys/compare-bar';
 import { CsvTools } from '../../../components/alloys/csv-tools';
-import { CATALOGUE_UNITS } from '../../../components/alloys/format';
+import { useUnits } from '../../../hooks/use-units';
+import { formatTemp } from '../../../components/alloys/format';
+import { growthBasisWords } from '../../../shared/units';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorBanner } from '../../../components/ui/error-banner';
@@ -17,12 +19,13 @@ import { layout, spacing } from '../../../constants/theme';
 import { messageOf } from '../../../hooks/api-client';
 import { CATALOGUE_CSV_URL, useAlloysQuery, useCsvImport } from '../../../hooks/use-alloys';
 import { useSessionQuery } from '../../../hooks/use-session';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function AlloyListScreen() {
   const router = useRouter();
   const { data: me } = useSessionQuery();
   const canEdit = me?.role === 'engineer' || me?.role === 'admin';
-  const units = CATALOGUE_UNITS;
+  const units = useUnits();
   const [filters, setFilters] = useState(DEFAULT_FILTERS);
   const [selected, setSelected] = useState<string[]>([]);
   const { params, atC, atError, minServiceError } = toListParams(filters, units);
@@ -34,6 +37,7 @@ export default function AlloyListScreen() {
     setSelected((ids) => (on ? (ids.includes(id) || ids.length >= MAX_COMPARE ? ids : [...ids, id]) : ids.filter((x) => x !== id)));
   const full = selected.length >= MAX_COMPARE;
 
+  useScreenTitle('Alloy catalogue');
   return (
     <Screen wide>
       <View style={styles.header}>
@@ -44,7 +48,7 @@ export default function AlloyListScreen() {
           {canEdit ? <Button label="New alloy" compact onPress={() => router.push('/alloys/new')} /> : null}
         </View>
         <Text tone="muted">
-          The shop’s tube alloys with the source behind every value. Growth is per metre of tube heated from 20 °C.
+          The shop’s tube alloys with the source behind every value. Growth is {growthBasisWords(units)} of tube heated from {formatTemp(20, units)}.
         </Text>
       </View>
 

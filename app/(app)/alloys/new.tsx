@@ -12,8 +12,10 @@ import { Text } from '../../../components/ui/text';
 import { messageOf } from '../../../hooks/api-client';
 import { useCreateAlloyMutation } from '../../../hooks/use-alloys';
 import { useCreateSourceMutation, useSourcesQuery } from '../../../hooks/use-sources';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function NewAlloyScreen() {
+  useScreenTitle('New alloy', 'Alloy catalogue');
   return (
     <RoleGate roles={EDITORS} title="Only engineers and admins add alloys">
       <NewAlloy />

@@ -10,6 +10,7 @@ import { spacing } from '../../../constants/theme';
 import { messageOf } from '../../../hooks/api-client';
 import { useCurrencyRatesQuery, useRemoveCurrencyRateMutation, useSetCurrencyRateMutation } from '../../../hooks/use-currency-rates';
 import { useSessionQuery } from '../../../hooks/use-session';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function CurrencyRatesScreen() {
   const { data: me } = useSessionQuery();
@@ -17,6 +18,7 @@ export default function CurrencyRatesScreen() {
   const save = useSetCurrencyRateMutation();
   const remove = useRemoveCurrencyRateMutation();
 
+  useScreenTitle('Currency rates');
   if (!me) return <LoadingState />;
   return (
     <Screen narrow>

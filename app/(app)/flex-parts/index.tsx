@@ -1,5 +1,5 @@
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
-import { CATALOGUE_UNITS } from '../../../components/alloys/format';
+import { useUnits } from '../../../hooks/use-units';
 import { EMPTY_FLEX_PART, FlexPartForm } from '../../../components/flex-parts/flex-part-form';
 import { FlexPartCard } from '../../../components/flex-parts/flex-part-card';
 import { Card } from '../../../components/ui/card';
@@ -12,6 +12,7 @@ import { layout, spacing } from '../../../constants/theme';
 import { messageOf } from '../../../hooks/api-client';
 import { useCreateFlexPartMutation, useFlexPartsQuery, useUpdateFlexPartMutation } from '../../../hooks/use-flex-parts';
 import { useSessionQuery } from '../../../hooks/use-session';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function FlexPartsScreen() {
   const { data: me } = useSessionQuery();
@@ -20,7 +21,9 @@ export default function FlexPartsScreen() {
   const create = useCreateFlexPartMutation();
   const update = useUpdateFlexPartMutation();
   const twoColumns = useWindowDimensions().width >= layout.wideBreakpoint;
+  const units = useUnits();
 
+  useScreenTitle('Flex parts');
   return (
     <Screen wide>
       <View style={styles.header}>
@@ -45,7 +48,7 @@ export default function FlexPartsScreen() {
               <FlexPartCard
                 key={part.id}
                 part={part}
-                units={CATALOGUE_UNITS}
+                units={units}
                 onUpdate={isAdmin ? (changes) => update.mutateAsync({ id: part.id, changes }) : undefined}
               />
             ))

@@ -18,6 +18,7 @@ import { messageOf } from '../../../hooks/api-client';
 import { type JobStatusFilter, useCreateJobMutation, useJobsQuery } from '../../../hooks/use-jobs';
 import { useSessionQuery } from '../../../hooks/use-session';
 import { useUnits } from '../../../hooks/use-units';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 const STATUS_OPTIONS = [
   { value: 'active', label: 'Active' },
@@ -37,6 +38,7 @@ export default function JobsScreen() {
   const createJob = useCreateJobMutation();
   const filtered = search.trim() !== '' || status !== 'active';
 
+  useScreenTitle('Jobs');
   return (
     <Screen>
       <View style={styles.header}>

@@ -11,11 +11,13 @@ import { Text } from '../../../components/ui/text';
 import { colors, spacing, touchTarget, typography } from '../../../constants/theme';
 import { isApiError, messageOf } from '../../../hooks/api-client';
 import { useOutboxMessageQuery } from '../../../hooks/use-outbox';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function OutboxMessageScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
   const message = useOutboxMessageQuery(id);
 
+  useScreenTitle(message.data?.subject ?? 'Message', 'Outbox');
   return (
     <Screen>
       <Link href="/outbox" style={styles.back} accessibilityRole="link">

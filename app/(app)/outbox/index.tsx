@@ -9,12 +9,14 @@ import { spacing } from '../../../constants/theme';
 import { messageOf } from '../../../hooks/api-client';
 import { useOutboxQuery } from '../../../hooks/use-outbox';
 import { useSessionQuery } from '../../../hooks/use-session';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function OutboxScreen() {
   const { data: me } = useSessionQuery();
   const allowed = me?.role === 'admin' || me?.role === 'sales';
   const outbox = useOutboxQuery(allowed);
 
+  useScreenTitle('Outbox');
   if (!me) return <LoadingState />;
   return (
     <Screen>

@@ -17,6 +17,7 @@ import { isApiError, messageOf } from '../../../hooks/api-client';
 import { useQuoteActivityQuery, useQuoteQuery, useSendQuoteMutation, useUpdateQuoteMutation } from '../../../hooks/use-quotes';
 import { useSessionQuery } from '../../../hooks/use-session';
 import type { QuoteView } from '../../../shared/schemas/quotes';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function QuoteScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -24,6 +25,7 @@ export default function QuoteScreen() {
   const quote = useQuoteQuery(id);
   const activity = useQuoteActivityQuery(id);
 
+  useScreenTitle(quote.data ? `Quote ${quote.data.number}` : 'Quote', quote.data?.customerName, 'Quotes');
   if (quote.isPending || !me) return <LoadingState label="Loading the quote…" />;
   if (quote.isError) {
     return (

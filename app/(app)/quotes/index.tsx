@@ -11,6 +11,7 @@ import { spacing } from '../../../constants/theme';
 import { messageOf } from '../../../hooks/api-client';
 import { useQuotesQuery } from '../../../hooks/use-quotes';
 import { useSessionQuery } from '../../../hooks/use-session';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function QuotesScreen() {
   const { data: me } = useSessionQuery();
@@ -19,6 +20,7 @@ export default function QuotesScreen() {
   const router = useRouter();
   const newQuote = canSell ? <Button label="New quote" onPress={() => router.push('/quotes/new')} /> : null;
 
+  useScreenTitle('Quotes');
   return (
     <Screen>
       <View style={styles.header}>

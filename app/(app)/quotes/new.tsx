@@ -11,6 +11,7 @@ import { Text } from '../../../components/ui/text';
 import { spacing } from '../../../constants/theme';
 import { useCreateQuoteMutation } from '../../../hooks/use-quotes';
 import { useSessionQuery } from '../../../hooks/use-session';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function NewQuoteScreen() {
   const router = useRouter();
@@ -18,6 +19,7 @@ export default function NewQuoteScreen() {
   const create = useCreateQuoteMutation();
   const [defaults] = useState(() => newQuoteDefaults(isoDateInDays(30)));
 
+  useScreenTitle('New quote');
   if (!me) return <LoadingState />;
   if (me.role !== 'sales' && me.role !== 'admin') {
     return (

@@ -10,12 +10,14 @@ import { spacing } from '../../../constants/theme';
 import { messageOf } from '../../../hooks/api-client';
 import { useSessionQuery } from '../../../hooks/use-session';
 import { useSaveShopSettingsMutation, useShopSettingsQuery } from '../../../hooks/use-shop-settings';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function ShopSettingsScreen() {
   const { data: me } = useSessionQuery();
   const settings = useShopSettingsQuery();
   const save = useSaveShopSettingsMutation();
 
+  useScreenTitle('Shop settings');
   if (!me) return <LoadingState />;
   return (
     <Screen narrow>

@@ -11,6 +11,7 @@ import { layout, spacing } from '../../../constants/theme';
 import { messageOf } from '../../../hooks/api-client';
 import { useSessionQuery } from '../../../hooks/use-session';
 import { useCreateUserMutation, useUpdateUserMutation, useUsersQuery } from '../../../hooks/use-users';
+import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
 export default function UsersScreen() {
   const { data: me } = useSessionQuery();
@@ -20,6 +21,7 @@ export default function UsersScreen() {
   const updateUser = useUpdateUserMutation();
   const twoColumns = useWindowDimensions().width >= layout.wideBreakpoint;
 
+  useScreenTitle('Users');
   if (!me) return <LoadingState />;
   if (!isAdmin) {
     return (

@@ -11,8 +11,10 @@ import { Text } from '../../../../components/ui/text';
 import { messageOf } from '../../../../hooks/api-client';
 import { useAlloyQuery, useUpdateAlloyMutation } from '../../../../hooks/use-alloys';
 import { useCreateSourceMutation, useSourcesQuery } from '../../../../hooks/use-sources';
+import { useScreenTitle } from '../../../../components/ui/use-screen-title';
 
 export default function EditAlloyScreen() {
+  useScreenTitle('Edit alloy', 'Alloy catalogue');
   return (
     <RoleGate roles={EDITORS} title="Only engineers and admins edit alloys">
       <EditAlloy />

@@ -8,7 +8,7 @@ import { CautionsNote } from '../../../../components/ui/cautions-note';
 import { DatasheetSection } from '../../../../components/alloys/datasheet-section';
 import { DiffList } from '../../../../components/alloys/diff-list';
 import { sourceMap } from '../../../../components/alloys/diff-text';
-import { CATALOGUE_UNITS } from '../../../../components/alloys/format';
+import { useUnits } from '../../../../hooks/use-units';
 import { RevisionHistory } from '../../../../components/alloys/revision-history';
 import { Section } from '../../../../components/ui/section';
 import { indexSources, SourceList } from '../../../../components/alloys/source-citation';
@@ -26,6 +26,7 @@ import { useAlloyQuery, useAlloyReviewQuery, useAlloyRevisionsQuery, useAlloySta
 import { useSessionQuery } from '../../../../hooks/use-session';
 import { useSourcesQuery } from '../../../../hooks/use-sources';
 import { useUploadDatasheetMutation } from '../../../../hooks/use-upload';
+import { useScreenTitle } from '../../../../components/ui/use-screen-title';
 
 type Shown = 'published' | 'draft';
 
@@ -34,7 +35,7 @@ export default function AlloyDetailScreen() {
   const { data: me } = useSessionQuery();
   const canEdit = me?.role === 'engineer' || me?.role === 'admin';
   const isAdmin = me?.role === 'admin';
-  const units = CATALOGUE_UNITS;
+  const units = useUnits();
   const alloy = useAlloyQuery(id);
   const revisions = useAlloyRevisionsQuery(id);
   const review = useAlloyReviewQuery(id, canEdit && Boolean(alloy.data?.draft));
@@ -43,6 +44,7 @@ export default function AlloyDetailScreen() {
   const allSources = useSourcesQuery();
   const [choice, setChoice] = useState<Shown>('published');
 
+  useScreenTitle(alloy.data ? `${alloy.data.published?.designation ?? alloy.data.draft?.designation ?? 'Alloy'}` : 'Alloy', 'Alloy catalogue');
   if (alloy.isPending) return <LoadingState label="Loading the alloy…" />;
   if (alloy.isError) {
     return (

@@ -22,6 +22,7 @@ import { useJobActivityQuery, useJobQuery, useReorderRunsMutation, useUpdateJobM
 import { useDeleteRunMutation, useDuplicateRunMutation } from '../../../../hooks/use-runs';
 import { useSessionQuery } from '../../../../hooks/use-session';
 import { useUnits } from '../../../../hooks/use-units';
+import { useScreenTitle } from '../../../../components/ui/use-screen-title';
 
 export default function JobScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -36,6 +37,7 @@ export default function JobScreen() {
   const remove = useDeleteRunMutation();
   const [actionError, setActionError] = useState<string>();
 
+  useScreenTitle(job.data?.name ?? 'Job', 'Jobs');
   if (job.isPending) return <LoadingState label="Loading the job…" />;
   if (job.isError) {
     return <LoadFailed title="The job did not load" error={job.error} onRetry={() => void job.refetch()} backHref="/jobs" backLabel="Back to the jobs" />;

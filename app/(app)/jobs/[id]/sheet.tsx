@@ -11,12 +11,14 @@ import { Screen } from '../../../../components/ui/screen';
 import { spacing } from '../../../../constants/theme';
 import { useJobQuery } from '../../../../hooks/use-jobs';
 import { useUnits } from '../../../../hooks/use-units';
+import { useScreenTitle } from '../../../../components/ui/use-screen-title';
 
 export default function JobSheetScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
   const units = useUnits();
   const job = useJobQuery(id);
 
+  useScreenTitle('Job sheet', job.data?.name);
   if (job.isPending) return <LoadingState label="Loading the job sheet…" />;
   if (job.isError) {
     return <LoadFailed title="The job sheet did not load" error={job.error} onRetry={() => void job.refetch()} backHref="/jobs" backLabel="Back to the jobs" />;

@@ -15,6 +15,7 @@ import { useJobQuery } from '../../../../../hooks/use-jobs';
 import { useCreateRunMutation } from '../../../../../hooks/use-runs';
 import { useSessionQuery } from '../../../../../hooks/use-session';
 import { useUnits } from '../../../../../hooks/use-units';
+import { useScreenTitle } from '../../../../../components/ui/use-screen-title';
 
 export default function NewRunScreen() {
   const { id } = useLocalSearchParams<{ id: string }>();
@@ -24,6 +25,7 @@ export default function NewRunScreen() {
   const job = useJobQuery(id);
   const create = useCreateRunMutation(id ?? '');
 
+  useScreenTitle('New run', job.data?.name);
   if (job.isPending) return <LoadingState label="Loading the job…" />;
   if (job.isError) {
     return <LoadFailed title="The job did not load" error={job.error} onRetry={() => void job.refetch()} backHref="/jobs" backLabel="Back to the jobs" />;

@@ -21,6 +21,7 @@ import { useCompareQuery, useRunQuery, useUpdateRunMutation } from '../../../../
 import { useSessionQuery } from '../../../../../../hooks/use-session';
 import { useUnits } from '../../../../../../hooks/use-units';
 import { COMPARE_MAX, COMPARE_MIN } from '../../../../../../shared/schemas/jobs';
+import { useScreenTitle } from '../../../../../../components/ui/use-screen-title';
 
 export default function CompareRunScreen() {
   const { id, runId } = useLocalSearchParams<{ id: string; runId: string }>();
@@ -37,6 +38,7 @@ export default function CompareRunScreen() {
   const [notice, setNotice] = useState<string>();
   const [failure, setFailure] = useState<string>();
 
+  useScreenTitle('Compare alloys', run.data ? `Run ${run.data.position}` : null, job.data?.name);
   if (run.isPending) return <LoadingState label="Loading the run…" />;
   if (run.isError) {
     return <LoadFailed title="The run did not load" error={run.error} onRetry={() => void run.refetch()} backHref={`/jobs/${id}`} backLabel="Back to the job" />;

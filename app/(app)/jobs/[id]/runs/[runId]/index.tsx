@@ -17,6 +17,7 @@ import { useJobQuery } from '../../../../../../hooks/use-jobs';
 import { useRunActivityQuery, useRunQuery, useUpdateRunMutation } from '../../../../../../hooks/use-runs';
 import { useSessionQuery } from '../../../../../../hooks/use-session';
 import { useUnits } from '../../../../../../hooks/use-units';
+import { useScreenTitle } from '../../../../../../components/ui/use-screen-title';
 
 export default function RunScreen() {
   const { id, runId } = useLocalSearchParams<{ id: string; runId: string }>();
@@ -27,6 +28,7 @@ export default function RunScreen() {
   const update = useUpdateRunMutation(runId ?? '');
   const activity = useRunActivityQuery(runId);
 
+  useScreenTitle(run.data ? `Run ${run.data.position}` : 'Run', run.data?.name, job.data?.name);
   if (run.isPending) return <LoadingState label="Loading the run…" />;
   if (run.isError) {
     return <LoadFailed title="The run did not load" error={run.error} onRetry={() => void run.refetch()} backHref={`/jobs/${id}`} backLabel="Back to the job" />;
