@@ -6,7 +6,7 @@ import { User } from '../users/user.entity';
 import { Job, JobRun } from '../jobs/job.entities';
 import { UserPreference } from '../preferences/user-preference.entity';
 import { MailMessage } from '../mail/mail-message.entity';
-import { Quote, QuoteEvent } from '../quotes/quote.entities';
+import { Quote, QuoteEvent, QuoteLimitOverride } from '../quotes/quote.entities';
 import { ShopSettingsRow } from '../settings/shop-settings.entity';
 import { SignInAddress } from '../auth/sign-in-address.entity';
 import { ActivityEntry } from '../activity/activity.entity';
@@ -24,6 +24,8 @@ import { CurrencyRates1764600510000 } from './migrations/1764600510000-currency-
 import { CurrencyRate } from '../currency/currency-rate.entity';
 import { Deposit, PaymentEventSeen } from '../payments/deposit.entities';
 import { QuoteDeposits1764600900000 } from './migrations/1764600900000-quote-deposits';
+import { QuoteLimitOverrides1764601300000 } from './migrations/1764601300000-quote-limit-overrides';
+import { AlloyReview1764601310000 } from './migrations/1764601310000-alloy-review';
 
 export const ENTITIES = [
   User,
@@ -46,6 +48,7 @@ export const ENTITIES = [
   ActivityEntry,
   Deposit,
   PaymentEventSeen,
+  QuoteLimitOverride,
 ];
 export const MIGRATIONS = [
   UsersAndSessions1764600000000,
@@ -60,6 +63,8 @@ export const MIGRATIONS = [
   Activity1764600610000,
   RunSupportsAndNearby1764600700000,
   QuoteDeposits1764600900000,
+  QuoteLimitOverrides1764601300000,
+  AlloyReview1764601310000,
 ];
 
 /** `database` is a file path, or ':memory:' for tests. */

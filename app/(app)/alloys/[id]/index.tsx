@@ -22,10 +22,11 @@ import { SegmentedControl } from '../../../../components/ui/segmented-control';
 import { Text } from '../../../../components/ui/text';
 import { spacing } from '../../../../constants/theme';
 import { messageOf } from '../../../../hooks/api-client';
-import { useAlloyQuery, useAlloyReviewQuery, useAlloyRevisionsQuery, useAlloyStatusMutation } from '../../../../hooks/use-alloys';
+import { useAlloyQuery, useAlloyReviewQuery, useAlloyRevisionsQuery, useAlloyStatusMutation, useReviewStepMutation } from '../../../../hooks/use-alloys';
+import { SubmitForReview } from '../../../../components/alloys/review-step-forms';
 import { useSessionQuery } from '../../../../hooks/use-session';
 import { useSourcesQuery } from '../../../../hooks/use-sources';
-import { useUploadDatasheetMutation } from '../../../../hooks/use-upload';
+import { useRemoveDatasheetMutation, useUploadDatasheetMutation } from '../../../../hooks/use-upload';
 
 type Shown = 'published' | 'draft';
 
@@ -40,6 +41,8 @@ export default function AlloyDetailScreen() {
   const review = useAlloyReviewQuery(id, canEdit && Boolean(alloy.data?.draft));
   const upload = useUploadDatasheetMutation(id ?? '');
   const status = useAlloyStatusMutation(id ?? '');
+  const reviewStep = useReviewStepMutation(id ?? '');
+  const removeSheet = useRemoveDatasheetMutation(id ?? '');
   const allSources = useSourcesQuery();
   const [choice, setChoice] = useState<Shown>('published');
 
@@ -85,6 +88,7 @@ export default function AlloyDetailScreen() {
               <ErrorBanner message={messageOf(review.error)} />
             ) : null
           ) : null}
+          <SubmitForReview review={detail.review} onSubmit={(note) => reviewStep.mutateAsync({ action: 'submit', note })} />
           <View style={styles.links}>
             <TextLink href={`/alloys/${detail.id}/edit`} label="Edit draft" />
             {isAdmin ? <TextLink href={`/alloys/${detail.id}/review`} label="Review and publish" /> : null}
@@ -124,9 +128,10 @@ export default function AlloyDetailScreen() {
           datasheets={detail.datasheets}
           upload={
             canEdit
-              ? { onUpload: (file) => upload.mutateAsync(file), progress: upload.progress, uploading: upload.isPending }
+              ? { onUpload: (file) => upload.mutateAsync(file), onCancel: upload.cancel, progress: upload.progress, uploading: upload.isPending }
               : undefined
           }
+          onRemove={canEdit ? (sheet) => removeSheet.mutateAsync(sheet.id) : undefined}
         />
       </Section>
 
@@ -136,12 +141,14 @@ export default function AlloyDetailScreen() {
             status={detail.status}
             hasDraft={Boolean(detail.draft)}
             hasPublished={Boolean(detail.published)}
+            publishQuestion={detail.draft ? `Publish draft version ${detail.draft.version} of ${detail.draft.designation}?` : undefined}
             onAction={(action, note) => status.mutateAsync({ action, note })}
           />
         </Section>
       ) : null}
 
       <Section title="Revision history">
+        {detail.published && detail.published.version > 1 ? <TextLink href={`/alloys/${detail.id}/versions`} label="Browse past versions" /> : null}
         {revisions.isPending ? (
           <LoadingState label="Loading the history…" />
         ) : revisions.isError ? (
