@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { diffAlloy } from '../../shared/catalogue/alloy-diff';
+import { diffAlloy, stripMeta } from '../../shared/catalogue/alloy-diff';
 import { toAlloyData } from '../../shared/catalogue/to-alloy-data';
 import { prepareStrainCurve, uniformGrowthMm } from '../../shared/engine/expansion';
 import type { AlloyData } from '../../shared/engine/types';
@@ -384,11 +384,4 @@ function pointRows(repo: CatalogueRepository, versionId: string, input: AlloyInp
       }),
     ),
   );
-}
-
-/** A version view without its bookkeeping, i.e. the alloy input it holds. */
-export function stripMeta(v: AlloyVersionView | null): AlloyInput | null {
-  if (!v) return null;
-  const { versionId: _a, version: _b, state: _c, createdAt: _d, createdBy: _e, publishedAt: _f, publishedBy: _g, ...input } = v;
-  return input;
 }

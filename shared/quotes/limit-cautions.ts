@@ -17,6 +17,9 @@ export function optionKey(option: { alloyId: string; runAlloys?: Record<string, 
   return JSON.stringify([option.alloyId, runs]);
 }
 
+/** The reason as a sentence, so it can stand inside quotation marks with its own full stop. */
+const sentence = (text: string) => (/[.!?]$/.test(text.trim()) ? text.trim() : `${text.trim()}.`);
+
 export interface OverrideWords {
   reason: string;
   by: string;
@@ -33,7 +36,7 @@ export function limitCautionWords(option: Pick<PricedOption, 'tempMarginC'>, ove
     return (
       `Caution: at the hottest part of your system this material would run about ${degrees} hotter than it is rated for in air. ` +
       'Metal that hot scales and weakens faster, so parts there may need replacing sooner. ' +
-      (override ? `${override.by} checked this option and recorded why it is still offered: “${override.reason}”. ` : '') +
+      (override ? `${override.by} checked this option and recorded why it is still offered: “${sentence(override.reason)}” ` : '') +
       'Please talk to us before choosing it.'
     );
   }

@@ -22,7 +22,8 @@ import { SegmentedControl } from '../../../../components/ui/segmented-control';
 import { Text } from '../../../../components/ui/text';
 import { spacing } from '../../../../constants/theme';
 import { messageOf } from '../../../../hooks/api-client';
-import { useAlloyQuery, useAlloyReviewQuery, useAlloyRevisionsQuery, useAlloyStatusMutation, useReviewStepMutation } from '../../../../hooks/use-alloys';
+import { draftChanges } from '../../../../shared/catalogue/alloy-diff';
+import { useAlloyQuery, useAlloyRevisionsQuery, useAlloyStatusMutation, useReviewStepMutation } from '../../../../hooks/use-alloys';
 import { SubmitForReview } from '../../../../components/alloys/review-step-forms';
 import { useSessionQuery } from '../../../../hooks/use-session';
 import { useSourcesQuery } from '../../../../hooks/use-sources';
@@ -38,7 +39,6 @@ export default function AlloyDetailScreen() {
   const units = CATALOGUE_UNITS;
   const alloy = useAlloyQuery(id);
   const revisions = useAlloyRevisionsQuery(id);
-  const review = useAlloyReviewQuery(id, canEdit && Boolean(alloy.data?.draft));
   const upload = useUploadDatasheetMutation(id ?? '');
   const status = useAlloyStatusMutation(id ?? '');
   const reviewStep = useReviewStepMutation(id ?? '');
@@ -81,13 +81,7 @@ export default function AlloyDetailScreen() {
               ? 'Not published yet: everyone else still works from the published data.'
               : 'This alloy has never been published; only engineers and admins can see it.'}
           </Text>
-          {detail.published ? (
-            review.data ? (
-              <DiffList diff={review.data.diff} sources={sources} units={units} label="Draft changes" />
-            ) : review.isError ? (
-              <ErrorBanner message={messageOf(review.error)} />
-            ) : null
-          ) : null}
+          {detail.published ? <DiffList diff={draftChanges(detail.published, detail.draft)} sources={sources} units={units} label="Draft changes" /> : null}
           <SubmitForReview review={detail.review} onSubmit={(note) => reviewStep.mutateAsync({ action: 'submit', note })} />
           <View style={styles.links}>
             <TextLink href={`/alloys/${detail.id}/edit`} label="Edit draft" />
