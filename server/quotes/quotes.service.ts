@@ -4,7 +4,8 @@ import { peakTempC } from '../../shared/engine/limits';
 import { compareWithFirst, priceOption, type PricedAlloy, type PricedRunInput } from '../../shared/quotes/pricing';
 import type { PublicUser } from '../../shared/schemas/auth';
 import { optionKey, optionLimitState } from '../../shared/quotes/limit-cautions';
-import type { LimitOverrideInput, LimitOverrideView, PublicQuoteView, QuoteInput, QuotePricing, QuoteStatus, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
+import { overridesInForce, requireOverrides } from './limit-overrides';
+import type { LimitOverrideInput, PublicQuoteView, QuoteInput, QuotePricing, QuoteStatus, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
 import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
 import type { CurrencyRatesService } from '../currency/currency-rates.service';
 import type { ActivityView } from '../../shared/schemas/activity';
@@ -136,7 +137,7 @@ export class QuotesService {
       }
     }
     const [job, events] = await Promise.all([this.jobs.read().findJob(quote.jobId), repo.eventsOf([quote.id])]);
-    const limitOverrides = quote.snapshot ? (quote.snapshot.limitOverrides ?? []) : await this.overridesInForce(repo, quote);
+    const limitOverrides = quote.snapshot ? (quote.snapshot.limitOverrides ?? []) : await overridesInForce(repo, quote);
     return {
       id: quote.id,
       number: quote.number,
@@ -205,13 +206,6 @@ export class QuotesService {
 
   // ---- temperature limit overrides ----
 
-  /** A draft's overrides that still fit its options: one recorded for other alloys no longer counts. */
-  private async overridesInForce(repo: QuotesRepository, quote: Quote): Promise<LimitOverrideView[]> {
-    return (await repo.limitOverridesOf(quote.id))
-      .filter((o) => quote.options[o.optionIndex] && optionKey(quote.options[o.optionIndex]) === o.optionKey)
-      .map((o) => ({ optionIndex: o.optionIndex, reason: o.reason, by: o.byName, at: new Date(o.at).toISOString() }));
-  }
-
   /** An engineer or admin vouches for an option over its temperature limit, with the reason; written in the quote's history. */
   async recordLimitOverride(id: string, input: LimitOverrideInput, actor: Actor): Promise<QuoteView> {
     return this.store.write(async (repo) => {
@@ -236,21 +230,6 @@ export class QuotesService {
       );
       return this.view(repo, quote);
     });
-  }
-
-  /** Sending needs an override for every option over its limit; the refusal names each one. */
-  private async overridesForSending(repo: QuotesRepository, quote: Quote, pricing: QuotePricing): Promise<LimitOverrideView[]> {
-    const overrides = await this.overridesInForce(repo, quote);
-    const missing = pricing.options.map((o, i) => ({ o, i })).filter(({ o, i }) => optionLimitState(o) === 'over' && !overrideFor(overrides, i));
-    if (missing.length > 0) {
-      const names = missing.map(({ o, i }) => `option ${i + 1} (${o.label}, ${Math.round(-o.tempMarginC)} °C over)`).join(', ');
-      throw AppError.conflict(
-        'limit_override_needed',
-        `Over its temperature limit: ${names}. An engineer or admin must record an override with a reason before the quote can be sent, or change the option.`,
-        Object.fromEntries(missing.map(({ i }) => [`options.${i}.alloyId`, 'Over its temperature limit: needs an override'])),
-      );
-    }
-    return overrides;
   }
 
   // ---- sales ----
@@ -326,7 +305,7 @@ export class QuotesService {
       if (quote.status !== 'draft') throw AppError.conflict('not_draft', 'This quote has already been sent.');
       if (quote.validUntil < today()) throw AppError.badRequest('invalid_input', 'The quote’s date has passed.', { validUntil: 'Choose a date from today on' });
       const priced = await this.priceNow(quote);
-      const pricing: QuotePricing = { ...priced, frozen: true, limitOverrides: await this.overridesForSending(repo, quote, priced) };
+      const pricing: QuotePricing = { ...priced, frozen: true, limitOverrides: requireOverrides(priced, await overridesInForce(repo, quote)) };
       const { jobName } = await this.jobRuns(quote.jobId);
       if (!(await repo.markSent(id, { snapshot: pricing, tokenHash, sentAt: new Date() }))) {
         throw AppError.conflict('not_draft', 'This quote has already been sent.');
