@@ -119,12 +119,25 @@ export interface SendOptions {
   contentType?: string;
   /** Fraction of the body sent so far, 0 to 1. */
   onProgress?: (fraction: number) => void;
+  /** Aborting stops the upload; the promise rejects with an `UploadCancelled`. */
+  signal?: AbortSignal;
+}
+
+/** What a cancelled upload rejects with, so callers can tell it from a failure. */
+export class UploadCancelled extends Error {
+  constructor() {
+    super('The upload was cancelled.');
+    this.name = 'UploadCancelled';
+  }
 }
 
 /** POST a file or raw text through XMLHttpRequest, which (unlike fetch) reports upload progress. */
-export function send<T>(path: string, body: FormData | string, { contentType, onProgress }: SendOptions = {}): Promise<T> {
+export function send<T>(path: string, body: FormData | string, { contentType, onProgress, signal }: SendOptions = {}): Promise<T> {
   return new Promise<T>((resolve, reject) => {
+    if (signal?.aborted) return reject(new UploadCancelled());
     const xhr = new XMLHttpRequest();
+    xhr.onabort = () => reject(new UploadCancelled());
+    signal?.addEventListener('abort', () => xhr.abort(), { once: true });
     xhr.open('POST', `/api${path}`);
     xhr.withCredentials = true;
     xhr.setRequestHeader('Accept', 'application/json');

@@ -9,6 +9,8 @@ import type {
   AlloyPatch,
   AlloySummary,
   AlloyVersionView,
+  AlloyVersionSummary,
+  ReviewQueueItem,
   RevisionView,
 } from '../shared/schemas/alloy';
 import { api, send } from './api-client';
@@ -39,6 +41,9 @@ export const alloyKeys = {
   detail: (id: string) => [...alloyKeys.all, 'detail', id] as const,
   revisions: (id: string) => [...alloyKeys.all, 'revisions', id] as const,
   review: (id: string) => [...alloyKeys.all, 'review', id] as const,
+  reviewQueue: () => [...alloyKeys.all, 'review-queue'] as const,
+  versions: (id: string) => [...alloyKeys.all, 'versions', id] as const,
+  version: (id: string, version: number) => [...alloyKeys.all, 'versions', id, version] as const,
   importJob: (id: string) => ['alloy-imports', id] as const,
 };
 
@@ -126,14 +131,58 @@ export function useAlloyStatusMutation(id: string) {
   return useMutation({
     mutationFn: async ({ action, note }: { action: AlloyStatusAction; note: string }) =>
       (await api.post<{ alloy: AlloyDetail }>(`/alloys/${encodeURIComponent(id)}/${action}`, { note })).alloy,
-    // The answer is the alloy as it now is; after publishing there is no draft, so the review is dropped, not refetched (it would answer 409).
+    // The answer is the alloy as it now is. After publishing there is no draft: the review is never refetched (it would
+    // answer 409). A review screen still showing it stops its query first (`useAlloyReviewQuery(id, false)`); removing the
+    // query under a mounted screen would make that screen fetch it again.
     onSuccess: (alloy) => {
       queryClient.setQueryData(alloyKeys.detail(id), alloy);
-      if (!alloy.draft) queryClient.removeQueries({ queryKey: alloyKeys.review(id) });
+      if (!alloy.draft) queryClient.removeQueries({ queryKey: alloyKeys.review(id), type: 'inactive' });
       return queryClient.invalidateQueries({
         queryKey: alloyKeys.all,
         predicate: (query) => query.queryKey[1] !== 'review' && !(query.queryKey[1] === 'detail' && query.queryKey[2] === id),
       });
+    },
+  });
+}
+
+/** Every version of an alloy, newest first (drafts for editors only). */
+export function useAlloyVersionsQuery(id: string | undefined) {
+  return useQuery({
+    queryKey: alloyKeys.versions(id ?? ''),
+    queryFn: async () => (await api.get<{ items: AlloyVersionSummary[] }>(`/alloys/${encodeURIComponent(id!)}/versions`)).items,
+    enabled: Boolean(id),
+  });
+}
+
+/** One version's full data, as it was. */
+export function useAlloyVersionQuery(id: string | undefined, version: number | undefined) {
+  return useQuery({
+    queryKey: alloyKeys.version(id ?? '', version ?? 0),
+    queryFn: async () => (await api.get<{ version: AlloyVersionView }>(`/alloys/${encodeURIComponent(id!)}/versions/${version}`)).version,
+    enabled: Boolean(id) && version !== undefined,
+  });
+}
+
+/** Drafts waiting for an admin, with their count (admin only). */
+export function useReviewQueueQuery(enabled = true) {
+  return useQuery({
+    queryKey: alloyKeys.reviewQueue(),
+    queryFn: () => api.get<{ items: ReviewQueueItem[]; count: number }>('/alloys/review-queue'),
+    enabled,
+  });
+}
+
+export type ReviewStepAction = 'submit' | 'send-back';
+
+/** An editor submits the draft for review; an admin sends it back with a note. */
+export function useReviewStepMutation(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async ({ action, note }: { action: ReviewStepAction; note: string }) =>
+      (await api.post<{ alloy: AlloyDetail }>(`/alloys/${encodeURIComponent(id)}/${action}`, { note })).alloy,
+    onSuccess: (alloy) => {
+      queryClient.setQueryData(alloyKeys.detail(id), alloy);
+      return queryClient.invalidateQueries({ queryKey: alloyKeys.all, predicate: (query) => query.queryKey[1] !== 'review' && query.queryKey[1] !== 'detail' });
     },
   });
 }

@@ -1,6 +1,6 @@
 import type { ActivityView } from '../shared/schemas/activity';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { QuoteInput, QuoteSummary, QuoteView } from '../shared/schemas/quotes';
+import type { LimitOverrideInput, QuoteInput, QuoteSummary, QuoteView } from '../shared/schemas/quotes';
 import { api } from './api-client';
 
 export interface EmailPreview {
@@ -78,6 +78,18 @@ export function useSendQuoteMutation(id: string) {
     onSuccess: (quote) => {
       queryClient.setQueryData(quoteKeys.detail(id), quote);
       void queryClient.invalidateQueries({ queryKey: ['outbox'] });
+      return queryClient.invalidateQueries({ queryKey: quoteKeys.all });
+    },
+  });
+}
+
+/** An engineer's or admin's override for an option over its temperature limit. */
+export function useLimitOverrideMutation(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: LimitOverrideInput) => (await api.post<{ quote: QuoteView }>(`${path(id)}/limit-overrides`, input)).quote,
+    onSuccess: (quote) => {
+      queryClient.setQueryData(quoteKeys.detail(id), quote);
       return queryClient.invalidateQueries({ queryKey: quoteKeys.all });
     },
   });

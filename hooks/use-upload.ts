@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import type { DatasheetView } from '../shared/schemas/alloy';
-import { ApiError, send } from './api-client';
+import { api, ApiError, send } from './api-client';
 import { alloyKeys } from './use-alloys';
 
 /** What expo-document-picker hands back; on the web it carries the browser's File. */
@@ -34,16 +34,23 @@ function formFor(picked: PickedFile): FormData {
 export function useUploadDatasheetMutation(alloyId: string) {
   const queryClient = useQueryClient();
   const [progress, setProgress] = useState<number | null>(null);
+  const inFlight = useRef<AbortController | null>(null);
   const mutation = useMutation({
     mutationFn: async (picked: PickedFile) => {
       setProgress(0);
-      const { datasheet } = await send<{ datasheet: DatasheetView }>(
-        `/alloys/${encodeURIComponent(alloyId)}/datasheets`,
-        formFor(picked),
-        { onProgress: setProgress },
-      );
-      setProgress(1);
-      return datasheet;
+      const controller = new AbortController();
+      inFlight.current = controller;
+      try {
+        const { datasheet } = await send<{ datasheet: DatasheetView }>(
+          `/alloys/${encodeURIComponent(alloyId)}/datasheets`,
+          formFor(picked),
+          { onProgress: setProgress, signal: controller.signal },
+        );
+        setProgress(1);
+        return datasheet;
+      } finally {
+        inFlight.current = null;
+      }
     },
     onError: () => setProgress(null),
     onSuccess: () => {
@@ -51,5 +58,19 @@ export function useUploadDatasheetMutation(alloyId: string) {
       void queryClient.invalidateQueries({ queryKey: alloyKeys.revisions(alloyId) });
     },
   });
-  return { ...mutation, progress };
+  /** Stops the upload in progress; the server keeps nothing of a file it did not receive whole. */
+  const cancel = () => inFlight.current?.abort();
+  return { ...mutation, progress, cancel };
+}
+
+/** Removes a data sheet (engineer, admin); the alloy's history records it. */
+export function useRemoveDatasheetMutation(alloyId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (datasheetId: string) => api.delete<{ removed: { id: string } }>(`/datasheets/${encodeURIComponent(datasheetId)}`),
+    onSuccess: () => {
+      void queryClient.invalidateQueries({ queryKey: alloyKeys.detail(alloyId) });
+      return queryClient.invalidateQueries({ queryKey: alloyKeys.revisions(alloyId) });
+    },
+  });
 }

@@ -20,6 +20,8 @@ import { webApp } from './web/web-app';
 import { calcRouter } from './calc/calc.router';
 import { CalcService } from './calc/calc.service';
 import { catalogueRouter } from './catalogue/catalogue.router';
+import { CatalogueReviewService } from './catalogue/review.service';
+import { CatalogueVersionsService } from './catalogue/versions.service';
 import { CatalogueStore } from './catalogue/catalogue.repository';
 import { CatalogueService } from './catalogue/catalogue.service';
 import { CatalogueCsvService } from './catalogue/catalogue-csv.service';
@@ -142,7 +144,7 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.use('/public', ...publicLimiters({ ...DEFAULT_PUBLIC_LIMITS, ...options.publicLimits }), publicQuotesRouter(quotes, options.publicUrl), publicDepositRouter(deposits, options.publicUrl));
   api.use('/outbox', outboxRouter(new OutboxRepository(dataSource)));
   api.use('/me', preferencesRouter(new PreferencesService(new PreferencesRepository(dataSource))));
-  api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore, new ImportJobs())));
+  api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore, new ImportJobs()), new CatalogueReviewService(catalogueStore, catalogueService), new CatalogueVersionsService(catalogueStore, catalogueService)));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

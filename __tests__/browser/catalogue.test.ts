@@ -112,6 +112,7 @@ describe('the alloy catalogue', () => {
     await admin.getByLabel('Note for the history', { exact: true }).fill('Checked against the mill sheet');
     await screenshot(admin, 'catalogue-6-admin-review');
     await admin.getByRole('button', { name: 'Publish' }).click();
+    await admin.getByRole('alertdialog', { name: 'Confirm publishing' }).getByRole('button', { name: 'Yes, publish' }).click();
     await admin.getByRole('heading', { name: DESIGNATION, level: 1 }).waitFor();
     await admin.getByText(`Version ${before.version + 1}`, { exact: true }).waitFor();
     await screenshot(admin, 'catalogue-7-published');

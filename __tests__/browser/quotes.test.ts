@@ -149,7 +149,7 @@ describe('sales quotes, sent to a customer who answers through the private link'
     await screenshot(page, 'quotes-9-sales-sees-accepted');
 
     const note = await openMail(page, 'sales@dilato.test', new RegExp(`Quote ${number} accepted by`));
-    expect(note).toContain('Oda Kallstrom for Oda Kallstrom accepted option “Alloy 625 throughout”');
+    expect(note).toContain('Oda Kallstrom for Kallstrom Track Days accepted option “Alloy 625 throughout”');
     await screenshot(page, 'quotes-10-outbox-notification');
 
     await page.goto('/quotes');

@@ -9,7 +9,6 @@ const alloy = (designation: string, uns: string) => ({
   uns,
   familyLabel: 'Austenitic stainless',
   serviceLimitC: 870,
-  densityKgM3: 8000,
   plainWords: `${designation} is good for about 870 °C in air.`,
 });
 
@@ -22,6 +21,9 @@ const option = (label: string, total: number, uns: string) => ({
   massDifferenceKg: 0,
   tempMarginC: 90,
   tempMarginGainedC: 0,
+  limitState: 'ok' as const,
+  limitCaution: null,
+  acceptable: true,
   alloys: [alloy(label.split(' throughout')[0], uns)],
 });
 

@@ -81,7 +81,7 @@ describe('POST /api/calc/run', () => {
     expect((await admin.patch(`/api/alloys/${id}`).send({ cte })).status).toBe(200);
     const draftOnly = (await admin.post('/api/calc/run').send(run)).body;
     expect(draftOnly.growthMm).toBe(before.growthMm);
-    await admin.post(`/api/alloys/${id}/publish`).send({});
+    await admin.post(`/api/alloys/${id}/publish`).send({ note: 'Checked' });
     const after = (await admin.post('/api/calc/run').send(run)).body;
     expect(after.alloy.version).toBe(2);
     // One more µm/m·K over 580 K adds 0.58 mm per metre.

@@ -144,7 +144,7 @@ describe('who may change the catalogue (every role × route)', () => {
     { what: 'export the catalogue as CSV', call: (c) => c.get('/api/alloys/export.csv'), allowed: [...ROLES] },
     { what: 'import a CSV', call: (c) => c.post('/api/alloys/import').set('Content-Type', 'text/csv').send('uns,designation,family,density_kg_m3,density_source,max_continuous_c,max_intermittent_c,limits_source,price_per_kg,currency,price_set_on,reference_temp_c,property,temp_c,value,source\n'), allowed: ['engineer', 'admin'] },
     { what: 'create an alloy', call: async (c) => { nextUns += 1; return c.post('/api/alloys').send(await newAlloyBody(`N8${String(nextUns).padStart(4, '0')}`)); }, allowed: ['engineer', 'admin'] },
-    { what: 'publish', call: (c, id) => c.post(`/api/alloys/${id}/publish`).send({}), allowed: ['admin'] },
+    { what: 'publish', call: (c, id) => c.post(`/api/alloys/${id}/publish`).send({ note: 'Checked' }), allowed: ['admin'] },
     { what: 'restore a retired alloy', call: async (c, id) => { await (await signedIn(t.app, 'admin')).post(`/api/alloys/${id}/retire`).send({}); return c.post(`/api/alloys/${id}/restore`).send({}); }, allowed: ['admin'] },
     { what: 'change a flex part', call: async (c) => { const parts = (await c.get('/api/flex-parts')).body.items ?? []; return c.patch(`/api/flex-parts/${parts[0]?.id ?? 'none'}`).send({ price: 91 }); }, allowed: ['admin'] },
     { what: 'retire', call: (c, id) => c.post(`/api/alloys/${id}/retire`).send({}), allowed: ['admin'] },
@@ -167,7 +167,7 @@ describe('who may change the catalogue (every role × route)', () => {
         const uns = `N9${String(nextUns).padStart(4, '0')}`;
         const created = await admin.post('/api/alloys').send(await newAlloyBody(uns));
         const id = created.body.alloy.id as string;
-        await admin.post(`/api/alloys/${id}/publish`).send({});
+        await admin.post(`/api/alloys/${id}/publish`).send({ note: 'Checked' });
         await admin.patch(`/api/alloys/${id}`).send({ notes: 'an open draft' });
         const res = await cell.call(await signedIn(t.app, role), id);
         if (allowed) expect(res.status).toBeLessThan(300);
@@ -286,7 +286,7 @@ describe('drafts, publishing and history', () => {
   it('when there is no draft, then publishing answers 409 no_draft', async () => {
     const admin = await signedIn(t.app, 'admin');
     const { id } = await alloyByUns('N06625');
-    const res = await admin.post(`/api/alloys/${id}/publish`).send({});
+    const res = await admin.post(`/api/alloys/${id}/publish`).send({ note: 'Checked' });
     expect(res.status).toBe(409);
     expectErrorShape(res.body, 'no_draft');
   });

@@ -16,7 +16,7 @@ async function priceIn(uns: string, pricePerKg: number, currency: string): Promi
   const admin = await signedIn(t.app, 'admin');
   const id = await alloyId(t, uns);
   expect((await admin.patch(`/api/alloys/${id}`).send({ pricePerKg, currency, note: 'Supplier quotes in dollars' })).status).toBe(200);
-  expect((await admin.post(`/api/alloys/${id}/publish`).send({})).status).toBe(200);
+  expect((await admin.post(`/api/alloys/${id}/publish`).send({ note: 'Checked' })).status).toBe(200);
   return id;
 }
 

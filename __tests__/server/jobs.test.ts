@@ -167,7 +167,7 @@ describe('run results', () => {
     expect(draftOnly.result!.growthMm).toBe(run.result!.growthMm);
     expect(draftOnly.alloy!.version).toBe(1);
 
-    expect((await admin.post(`/api/alloys/${s347}/publish`).send({})).status).toBe(200);
+    expect((await admin.post(`/api/alloys/${s347}/publish`).send({ note: 'Checked' })).status).toBe(200);
     const after = (await fab.get(`/api/runs/${run.id}`)).body.run as RunView;
     expect(after.alloy!.version).toBe(2);
     // One more µm/(m·K) over 580 K adds 0.58 mm per metre.

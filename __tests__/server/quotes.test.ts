@@ -84,7 +84,7 @@ describe('building and sending a quote', () => {
     const admin = await signedIn(t.app, 'admin');
     const { s321 } = await ids();
     await admin.patch(`/api/alloys/${s321}`).send({ pricePerKg: 999 });
-    await admin.post(`/api/alloys/${s321}/publish`).send({});
+    await admin.post(`/api/alloys/${s321}/publish`).send({ note: 'Checked' });
     const again = (await sales.get(`/api/quotes/${quote.id}`)).body.quote as QuoteView;
     expect(again.pricing!.options[0].total).toBe(sent.body.quote.pricing.options[0].total);
     expect((await sales.patch(`/api/quotes/${quote.id}`).send({ message: 'x' })).status).toBe(409);

@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { NextStepCard } from '../../components/home/next-step-card';
+import { ReviewQueueCard } from '../../components/home/review-queue-card';
 import { ROLE_INTROS, ROLE_STEPS } from '../../components/home/role-steps';
 import { LoadingState } from '../../components/ui/loading-state';
 import { Screen } from '../../components/ui/screen';
@@ -24,6 +25,7 @@ export default function HomeScreen() {
         <Text variant="bodyStrong">Signed in as {user.name}</Text>
         <Text tone="muted">{ROLE_INTROS[user.role]}</Text>
       </View>
+      {user.role === 'admin' ? <ReviewQueueCard /> : null}
       <View style={styles.section}>
         <Text variant="heading" headingLevel={2}>
           What you can do next

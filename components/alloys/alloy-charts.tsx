@@ -3,8 +3,9 @@ import { spacing } from '../../constants/theme';
 import type { AlloyVersionView } from '../../shared/schemas/alloy';
 import { cteMetricToImperial, growthBasisWords, toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
 import { LineChart } from '../charts/line-chart';
-import { COLD_C, cteCurve, growthAt, growthCurve, maxDataC } from './curves';
-import { cteUnit, formatGrowth, formatTemp } from './format';
+import { COLD_C, cteCurve, growthCurve, maxDataC } from './curves';
+import { cteUnit, formatTemp } from './format';
+import { limitMarking } from './limit-marker';
 
 /** Points in the chosen unit system (the engine answers in SI). */
 function shown(points: { x: number; y: number }[], units: UnitSystem, y: (v: number) => number) {
@@ -15,8 +16,7 @@ export function AlloyCharts({ version, units }: { version: AlloyVersionView; uni
   const tUnit = unitLabel('temperature', units);
   const growth = shown(growthCurve(version), units, (v) => toDisplay('growthPerLength', v, units));
   const cte = shown(cteCurve(version), units, (v) => (units === 'metric' ? v : cteMetricToImperial(v)));
-  const limitC = Math.min(version.maxContinuousC, maxDataC(version));
-  const atLimit = growthAt(version, limitC);
+  const marking = limitMarking(version, units);
   const top = growth[growth.length - 1];
   return (
     <View style={styles.charts}>
@@ -24,19 +24,16 @@ export function AlloyCharts({ version, units }: { version: AlloyVersionView; uni
         title={`Growth ${growthBasisWords(units)} against temperature`}
         summary={`From ${formatTemp(COLD_C, units)} up to ${formatTemp(maxDataC(version), units)} the tube grows ${
           top ? `${top.y.toFixed(2)} ${unitLabel('growthPerLength', units)}` : 'by an unknown amount'
-        }.`}
+        }.${marking.note ? ` ${marking.note}` : ''}`}
         series={[{ id: 'growth', label: `${version.designation}, growth from ${formatTemp(COLD_C, units)}`, points: growth }]}
         xAxis={{ label: `Temperature (${tUnit})`, format: (v) => v.toFixed(0) }}
         yAxis={{ label: unitLabel('growthPerLength', units), format: (v) => v.toFixed(1) }}
         marker={
-          atLimit === null
-            ? undefined
-            : {
-                x: toDisplay('temperature', limitC, units),
-                y: toDisplay('growthPerLength', atLimit, units),
-                label: `Continuous limit ${formatTemp(limitC, units)}: ${formatGrowth(atLimit, units)}`,
-              }
+          marking.marker
+            ? { x: toDisplay('temperature', marking.marker.tempC, units), y: toDisplay('growthPerLength', marking.marker.growth, units), label: marking.marker.label }
+            : undefined
         }
+        legendNote={marking.note ?? undefined}
       />
       <LineChart
         title={`Mean CTE from ${formatTemp(version.referenceTempC, units)} against temperature`}

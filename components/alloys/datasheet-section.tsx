@@ -2,7 +2,7 @@ import * as DocumentPicker from 'expo-document-picker';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, spacing } from '../../constants/theme';
-import { messageOf } from '../../hooks/api-client';
+import { messageOf, UploadCancelled } from '../../hooks/api-client';
 import type { PickedFile } from '../../hooks/use-upload';
 import type { DatasheetView } from '../../shared/schemas/alloy';
 import { Button } from '../ui/button';
@@ -18,13 +18,17 @@ export interface DatasheetSectionProps {
   /** Present for engineers and admins. */
   upload?: {
     onUpload: (file: PickedFile) => Promise<unknown>;
+    /** Stops the upload in progress. */
+    onCancel: () => void;
     /** 0–1 while a file is on its way or just arrived; null when idle. */
     progress: number | null;
     uploading: boolean;
   };
+  /** Present for engineers and admins: removes the sheet (asked once more first). */
+  onRemove?: (sheet: DatasheetView) => Promise<unknown>;
 }
 
-export function DatasheetSection({ datasheets, upload }: DatasheetSectionProps) {
+export function DatasheetSection({ datasheets, upload, onRemove }: DatasheetSectionProps) {
   const [failure, setFailure] = useState<string>();
   const [done, setDone] = useState<string>();
 
@@ -39,7 +43,8 @@ export function DatasheetSection({ datasheets, upload }: DatasheetSectionProps) 
       await upload.onUpload(asset);
       setDone(`${asset.name} is attached.`);
     } catch (error) {
-      setFailure(messageOf(error));
+      if (error instanceof UploadCancelled) setDone(`Upload of ${asset.name} cancelled; nothing was attached.`);
+      else setFailure(messageOf(error));
     }
   }
 
@@ -60,6 +65,7 @@ export function DatasheetSection({ datasheets, upload }: DatasheetSectionProps) 
                 {formatBytes(d.sizeBytes)} · added {formatWhen(d.uploadedAt)}
                 {d.uploadedBy ? ` by ${d.uploadedBy}` : ''}
               </Text>
+              {onRemove ? <RemoveSheet sheet={d} onRemove={onRemove} onRemoved={setDone} /> : null}
             </View>
           ))}
         </View>
@@ -77,6 +83,7 @@ export function DatasheetSection({ datasheets, upload }: DatasheetSectionProps) 
             PDF only, up to 25 MB.
           </Text>
           {upload.progress !== null ? <UploadProgress fraction={upload.progress} /> : null}
+          {upload.uploading ? <Button label="Cancel upload" variant="ghost" compact onPress={upload.onCancel} /> : null}
           {failure ? <ErrorBanner title="The data sheet was not attached" message={failure} /> : null}
           {done ? <SuccessNote message={done} /> : null}
         </View>
@@ -85,7 +92,37 @@ export function DatasheetSection({ datasheets, upload }: DatasheetSectionProps) 
   );
 }
 
+function RemoveSheet({ sheet, onRemove, onRemoved }: { sheet: DatasheetView; onRemove: (sheet: DatasheetView) => Promise<unknown>; onRemoved: (text: string) => void }) {
+  const [asking, setAsking] = useState(false);
+  const [busy, setBusy] = useState(false);
+  const [failure, setFailure] = useState<string>();
+  async function remove() {
+    setBusy(true);
+    setFailure(undefined);
+    try {
+      await onRemove(sheet);
+      onRemoved(`${sheet.originalName} is removed.`);
+    } catch (error) {
+      setFailure(messageOf(error));
+      setBusy(false);
+    }
+  }
+  if (!asking) return <Button label="Remove" accessibilityLabel={`Remove ${sheet.originalName}`} variant="ghost" compact onPress={() => setAsking(true)} />;
+  return (
+    <View role="alertdialog" aria-label={`Remove ${sheet.originalName}?`} style={styles.ask}>
+      <Text variant="bodyStrong">Remove {sheet.originalName}? The file is deleted; the history keeps a note of it.</Text>
+      <View style={styles.buttons}>
+        <Button label="Yes, remove it" variant="danger" compact loading={busy} onPress={() => void remove()} />
+        <Button label="Keep it" variant="ghost" compact disabled={busy} onPress={() => setAsking(false)} />
+      </View>
+      {failure ? <ErrorBanner title="The data sheet was not removed" message={failure} /> : null}
+    </View>
+  );
+}
+
 const styles = StyleSheet.create({
+  ask: { gap: spacing.sm },
+  buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
   wrapper: { gap: spacing.md },
   list: { gap: spacing.xs },
   item: { borderBottomWidth: 1, borderBottomColor: colors.border, paddingBottom: spacing.xs },

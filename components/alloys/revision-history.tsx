@@ -15,6 +15,9 @@ const ACTION_LABELS: Record<RevisionView['action'], string> = {
   retired: 'Retired',
   restored: 'Restored',
   datasheet_added: 'Data sheet added',
+  datasheet_removed: 'Data sheet removed',
+  submitted: 'Submitted for review',
+  sent_back: 'Sent back',
 };
 
 const SHOWN_AT_FIRST = 4;

@@ -44,11 +44,13 @@ export interface LineChartProps {
   /** A second y-axis on the right, for the series marked `secondary`. */
   secondaryYAxis?: ChartAxis;
   marker?: ChartMarker;
+  /** A line of words at the end of the legend, for what the drawing cannot show. */
+  legendNote?: string;
   height?: number;
 }
 
 /** One or more lines against a shared x-axis, optionally a right-hand axis and a marked point. */
-export function LineChart({ title, summary, series, xAxis, yAxis, secondaryYAxis, marker, height = 280 }: LineChartProps) {
+export function LineChart({ title, summary, series, xAxis, yAxis, secondaryYAxis, marker, legendNote, height = 280 }: LineChartProps) {
   const [width, setWidth] = useState(0);
   const onLayout = (e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width));
 
@@ -93,6 +95,7 @@ export function LineChart({ title, summary, series, xAxis, yAxis, secondaryYAxis
             <Text variant="caption">{marker.label}</Text>
           </View>
         ) : null}
+        {legendNote ? <Text variant="caption">{legendNote}</Text> : null}
       </View>
     </View>
   );

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { spacing } from '../../constants/theme';
+import { colors, radii, spacing } from '../../constants/theme';
 import type { PublicQuoteView } from '../../shared/schemas/quotes';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
@@ -56,6 +56,11 @@ export function PublicOptionCard({ option, index, currency, accepted, children }
             {first ? '' : ` ${formatDegreesDifference(option.tempMarginGainedC)} against option 1.`}
           </Text>
         </View>
+        {option.limitCaution ? (
+          <View style={[styles.caution, option.limitState === 'over' ? styles.over : null]} role="note" aria-label={`Temperature caution for option ${index + 1}`}>
+            <Text variant="bodyStrong">{option.limitCaution}</Text>
+          </View>
+        ) : null}
         <View style={styles.alloys}>
           <Text variant="label">What the material means for you</Text>
           {option.alloys.map((a) => (
@@ -75,4 +80,6 @@ const styles = StyleSheet.create({
   body: { gap: spacing.sm },
   facts: { gap: spacing.xs },
   alloys: { gap: spacing.xs },
+  caution: { padding: spacing.md, borderRadius: radii.md, borderLeftWidth: 4, borderLeftColor: colors.warning, backgroundColor: colors.warningSoft },
+  over: { borderLeftColor: colors.danger },
 });

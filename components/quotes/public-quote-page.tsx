@@ -48,8 +48,11 @@ export function PublicQuotePage({ quote, onDecide, depositSection }: PublicQuote
       <View style={styles.options}>
         {quote.options.map((option, index) => (
           <PublicOptionCard key={index} option={option} index={index} currency={quote.currency} accepted={quote.acceptedOptionIndex === index}>
-            {open && step.kind === 'choosing' ? (
+            {open && step.kind === 'choosing' && option.acceptable ? (
               <Button label={`Accept option ${index + 1}`} onPress={() => setStep({ kind: 'accepting', index })} />
+            ) : null}
+            {open && !option.acceptable ? (
+              <Text tone="danger">This option runs over its material’s temperature limit and cannot be accepted here; ask {quote.shopName} about it.</Text>
             ) : null}
             {decidedBy && quote.acceptedOptionIndex === index ? <Recorded shopName={quote.shopName} /> : null}
             {open && step.kind === 'accepting' && step.index === index ? (

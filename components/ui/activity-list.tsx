@@ -14,6 +14,7 @@ const ACTION_LABELS: Record<ActivityAction, string> = {
   reordered: 'runs put in a new order',
   sent: 'sent',
   refunded: 'deposit refunded',
+  limit_overridden: 'temperature limit override recorded',
 };
 const SUBJECT_LABELS: Record<ActivityView['subject'], string> = { job: 'Job', run: 'Run', quote: 'Quote' };
 const SHOWN_CHANGES = 4;

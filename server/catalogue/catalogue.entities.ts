@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryColumn, UpdateDateColumn } from 'typeorm';
-import type { AlloyFamily, AlloyStatus } from '../../shared/schemas/alloy';
+import type { AlloyFamily, AlloyStatus, ReviewStep, RevisionAction } from '../../shared/schemas/alloy';
+import { columnType } from '../db/column-types';
 
 @Entity({ name: 'source' })
 export class Source {
@@ -23,6 +24,11 @@ export class Alloy {
   @Column('varchar') status: AlloyStatus;
   @Column('varchar', { name: 'published_version_id', nullable: true }) publishedVersionId: string | null;
   @Column('varchar', { name: 'draft_version_id', nullable: true }) draftVersionId: string | null;
+  /** The open draft's place in review: submitted by an editor, or sent back by an admin; null otherwise. */
+  @Column('varchar', { name: 'review_step', nullable: true }) reviewStep: ReviewStep | null;
+  @Column('text', { name: 'review_note', default: '' }) reviewNote: string;
+  @Column('varchar', { name: 'review_by', nullable: true }) reviewBy: string | null;
+  @Column({ type: columnType.time, name: 'review_at', nullable: true }) reviewAt: Date | null;
   @CreateDateColumn({ name: 'created_at', type: 'datetime' }) createdAt: Date;
   @UpdateDateColumn({ name: 'updated_at', type: 'datetime' }) updatedAt: Date;
 }
@@ -82,7 +88,7 @@ export class AlloyRevision {
   @PrimaryColumn('varchar') id: string;
   @Column('varchar', { name: 'alloy_id' }) alloyId: string;
   @Column('integer', { nullable: true }) version: number | null;
-  @Column('varchar') action: 'created' | 'edited' | 'published' | 'retired' | 'restored' | 'datasheet_added';
+  @Column('varchar') action: RevisionAction;
   @Column('varchar', { name: 'user_id', nullable: true }) userId: string | null;
   @Column('varchar', { name: 'user_name', nullable: true }) userName: string | null;
   @Column('varchar', { default: '' }) note: string;

@@ -20,6 +20,9 @@ export class CatalogueRepository {
   findAlloy(id: string) {
     return this.m.findOneBy(Alloy, { id });
   }
+  alloysInReview() {
+    return this.m.findBy(Alloy, { reviewStep: 'submitted' });
+  }
   findAlloyByUns(uns: string) {
     return this.m.findOneBy(Alloy, { uns });
   }
@@ -35,6 +38,9 @@ export class CatalogueRepository {
   }
   versionsOf(alloyId: string) {
     return this.m.find(AlloyVersion, { where: { alloyId }, select: { id: true, version: true, state: true } });
+  }
+  versionSummariesOf(alloyId: string) {
+    return this.m.find(AlloyVersion, { where: { alloyId }, select: { id: true, version: true, state: true, designation: true, publishedAt: true, createdAt: true } });
   }
   findVersionByNumber(alloyId: string, version: number) {
     return this.m.findOneBy(AlloyVersion, { alloyId, version });
@@ -95,6 +101,9 @@ export class CatalogueRepository {
   }
   datasheetsFor(alloyId: string) {
     return this.m.find(Datasheet, { where: { alloyId }, order: { uploadedAt: 'DESC' } });
+  }
+  deleteDatasheet(id: string) {
+    return this.m.delete(Datasheet, { id });
   }
   findDatasheet(id: string) {
     return this.m.findOneBy(Datasheet, { id });

@@ -1,15 +1,19 @@
 import express, { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { MAX_IMPORT_BYTES } from '../../shared/catalogue/catalogue-csv';
-import { alloyInputSchema, alloyListQuerySchema, alloyPatchSchema, sourceInputSchema } from '../../shared/schemas/alloy';
+import { alloyInputSchema, alloyListQuerySchema, alloyPatchSchema, reviewNoteSchema, sourceInputSchema } from '../../shared/schemas/alloy';
 import { requireRole, requireSignedIn } from '../auth/session';
 import { AppError } from '../http/app-error';
 import { fieldsFromZod, parseBody, parsePatch } from '../http/validate';
 import type { CatalogueCsvService } from './catalogue-csv.service';
 import type { CatalogueService } from './catalogue.service';
+import type { CatalogueReviewService } from './review.service';
+import type { CatalogueVersionsService } from './versions.service';
 
 const noteSchema = z.object({ note: z.string({ error: 'The note must be text' }).trim().max(500, { error: 'Use at most 500 characters' }).default('') });
 const createSchema = alloyInputSchema.extend(noteSchema.shape);
+/** Publishing and sending back say why, for the history and for the engineer. */
+const requiredNoteSchema = reviewNoteSchema(true);
 
 /** The CSV body, with a refusal that says how large a file may be. */
 const csvBody: RequestHandler = (req, res, next) => {
@@ -21,7 +25,7 @@ const csvBody: RequestHandler = (req, res, next) => {
   });
 };
 
-export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvService): Router {
+export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvService, review: CatalogueReviewService, versions: CatalogueVersionsService): Router {
   const router = Router();
   const editors = requireRole('engineer', 'admin');
   const admins = requireRole('admin');
@@ -49,6 +53,11 @@ export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvServ
     res.json({ import: csv.importStatus(req.params.id as string) });
   });
 
+  router.get('/alloys/review-queue', admins, async (_req, res) => {
+    const items = await review.queue();
+    res.json({ items, count: items.length });
+  });
+
   router.post('/alloys', editors, async (req, res) => {
     const { note, ...input } = parseBody(createSchema, req.body);
     res.status(201).json({ alloy: await service.create(input, req.user!, note) });
@@ -60,6 +69,10 @@ export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvServ
 
   router.patch('/alloys/:id', editors, async (req, res) => {
     res.json({ alloy: await service.patch(req.params.id as string, parsePatch(alloyPatchSchema, req.body), req.user!) });
+  });
+
+  router.get('/alloys/:id/versions', requireSignedIn, async (req, res) => {
+    res.json({ items: await versions.list(req.params.id as string, req.user!) });
   });
 
   router.get('/alloys/:id/versions/:version', requireSignedIn, async (req, res) => {
@@ -76,8 +89,18 @@ export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvServ
     res.json(await service.review(req.params.id as string, req.user!));
   });
 
-  router.post('/alloys/:id/publish', admins, async (req, res) => {
+  router.post('/alloys/:id/submit', editors, async (req, res) => {
     const { note } = parseBody(noteSchema, req.body);
+    res.json({ alloy: await review.submit(req.params.id as string, req.user!, note) });
+  });
+
+  router.post('/alloys/:id/send-back', admins, async (req, res) => {
+    const { note } = parseBody(requiredNoteSchema, req.body);
+    res.json({ alloy: await review.sendBack(req.params.id as string, req.user!, note) });
+  });
+
+  router.post('/alloys/:id/publish', admins, async (req, res) => {
+    const { note } = parseBody(requiredNoteSchema, req.body);
     res.json({ alloy: await service.publish(req.params.id as string, req.user!, note) });
   });
 

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { diffAlloy } from '../../shared/catalogue/alloy-diff';
+import { diffAlloy, stripMeta } from '../../shared/catalogue/alloy-diff';
 import { toAlloyData } from '../../shared/catalogue/to-alloy-data';
 import { prepareStrainCurve, uniformGrowthMm } from '../../shared/engine/expansion';
 import type { AlloyData } from '../../shared/engine/types';
@@ -58,7 +58,7 @@ export class CatalogueService {
 
   // ---- reading ----
 
-  private async views(repo: CatalogueRepository, versionIds: (string | null)[]) {
+  async views(repo: CatalogueRepository, versionIds: (string | null)[]) {
     const ids = versionIds.filter((id): id is string => id !== null);
     const [versions, points] = await Promise.all([repo.findVersions(ids), repo.pointsFor(ids)]);
     return new Map(versions.map((v) => [v.id, versionView(v, points)]));
@@ -121,7 +121,7 @@ export class CatalogueService {
     return { items: items.slice(start, start + query.pageSize), total: items.length };
   }
 
-  private async visibleAlloy(repo: CatalogueRepository, id: string, actor: Actor): Promise<Alloy> {
+  async visibleAlloy(repo: CatalogueRepository, id: string, actor: Actor): Promise<Alloy> {
     const alloy = await repo.findAlloy(id);
     if (!alloy || (!alloy.publishedVersionId && !canEdit(actor))) throw AppError.notFound('There is no such alloy.');
     return alloy;
@@ -131,7 +131,7 @@ export class CatalogueService {
     return this.detailIn(this.store.read(), id, actor);
   }
 
-  private async detailIn(repo: CatalogueRepository, id: string, actor: Actor): Promise<AlloyDetail> {
+  async detailIn(repo: CatalogueRepository, id: string, actor: Actor): Promise<AlloyDetail> {
     const alloy = await this.visibleAlloy(repo, id, actor);
     const draftId = canEdit(actor) ? alloy.draftVersionId : null;
     const views = await this.views(repo, [alloy.publishedVersionId, draftId]);
@@ -146,6 +146,7 @@ export class CatalogueService {
       draft,
       sources: sources.map(sourceView),
       datasheets: sheets.map(datasheetView),
+      review: draft && alloy.reviewStep ? { step: alloy.reviewStep, note: alloy.reviewNote, by: alloy.reviewBy, at: new Date(alloy.reviewAt ?? alloy.updatedAt).toISOString() } : null,
     };
   }
 
@@ -238,7 +239,7 @@ export class CatalogueService {
     return repo.create(AlloyRevision, { id: randomUUID(), alloyId, userId: actor?.id ?? null, userName: actor?.name ?? 'Dilato seed', at: new Date(), ...fields });
   }
 
-  private revision(repo: CatalogueRepository, alloyId: string, fields: Pick<AlloyRevision, 'action' | 'version' | 'note' | 'diff'>, actor: Actor) {
+  revision(repo: CatalogueRepository, alloyId: string, fields: Pick<AlloyRevision, 'action' | 'version' | 'note' | 'diff'>, actor: Actor) {
     return repo.addRevision(this.revisionRow(repo, alloyId, fields, actor));
   }
 
@@ -319,7 +320,7 @@ export class CatalogueService {
       const draft = (await repo.findVersion(alloy.draftVersionId))!;
       Object.assign(draft, { state: 'published', publishedAt: new Date(), publishedBy: actor?.id ?? null });
       await repo.saveVersion(draft);
-      Object.assign(alloy, { publishedVersionId: draft.id, draftVersionId: null, status: 'published', uns: draft.uns });
+      Object.assign(alloy, { publishedVersionId: draft.id, draftVersionId: null, status: 'published', uns: draft.uns, reviewStep: null, reviewNote: '', reviewBy: null, reviewAt: null });
       await repo.saveAlloy(alloy);
       await this.revision(repo, alloy.id, { action: 'published', version: draft.version, note, diff: diffAlloy(stripMeta(before), stripMeta(draftView)!) }, actor);
       return this.detailIn(repo, alloy.id, actor);
@@ -388,11 +389,4 @@ function pointRows(repo: CatalogueRepository, versionId: string, input: AlloyInp
       }),
     ),
   );
-}
-
-/** A version view without its bookkeeping, i.e. the alloy input it holds. */
-export function stripMeta(v: AlloyVersionView | null): AlloyInput | null {
-  if (!v) return null;
-  const { versionId: _a, version: _b, state: _c, createdAt: _d, createdBy: _e, publishedAt: _f, publishedBy: _g, ...input } = v;
-  return input;
 }

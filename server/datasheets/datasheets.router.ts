@@ -19,7 +19,7 @@ function uploadOne(uploadsDir: string): RequestHandler {
   };
 }
 
-/** POST /api/alloys/:id/datasheets (engineer, admin) and GET /api/datasheets/:id (anyone signed in). */
+/** POST /api/alloys/:id/datasheets and DELETE /api/datasheets/:id (engineer, admin); GET /api/datasheets/:id (anyone signed in). */
 export function datasheetsRouter(service: DatasheetsService, uploadsDir: string): Router {
   const router = Router();
 
@@ -37,6 +37,11 @@ export function datasheetsRouter(service: DatasheetsService, uploadsDir: string)
     res.setHeader('Content-Type', 'application/pdf');
     res.setHeader('Content-Length', String(file.sizeBytes));
     res.sendFile(file.path);
+  });
+
+  router.delete('/datasheets/:id', requireRole('engineer', 'admin'), async (req, res) => {
+    await service.remove(req.params.id as string, req.user!);
+    res.json({ removed: { id: req.params.id } });
   });
 
   return router;

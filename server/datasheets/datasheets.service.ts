@@ -65,6 +65,32 @@ export class DatasheetsService {
     }
   }
 
+  /** Removes a data sheet: the row and a revision entry in one transaction, then the file from storage. */
+  async remove(id: string, actor: Actor): Promise<void> {
+    const storedName = await this.store.write(async (repo) => {
+      const sheet = await repo.findDatasheet(id);
+      const alloy = sheet ? await repo.findAlloy(sheet.alloyId) : null;
+      if (!sheet || !alloy) throw AppError.notFound('There is no such data sheet.');
+      await repo.deleteDatasheet(id);
+      await repo.addRevision(
+        repo.create(AlloyRevision, {
+          id: randomUUID(),
+          alloyId: sheet.alloyId,
+          version: null,
+          action: 'datasheet_removed',
+          userId: actor?.id ?? null,
+          userName: actor?.name ?? null,
+          note: sheet.originalName,
+          diff: [{ path: 'datasheets', before: { name: sheet.originalName, sha256: sheet.sha256 }, after: null }],
+          at: new Date(),
+        }),
+      );
+      return sheet.storedName;
+    });
+    // After the commit: a failed delete leaves the file behind, never a row pointing at nothing.
+    this.discard(storedName);
+  }
+
   discard(storedName: string) {
     fs.rmSync(path.join(this.uploadsDir, storedName), { force: true });
   }

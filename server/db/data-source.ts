@@ -6,7 +6,7 @@ import { User } from '../users/user.entity';
 import { Job, JobRun } from '../jobs/job.entities';
 import { UserPreference } from '../preferences/user-preference.entity';
 import { MailMessage } from '../mail/mail-message.entity';
-import { Quote, QuoteEvent } from '../quotes/quote.entities';
+import { Quote, QuoteEvent, QuoteLimitOverride } from '../quotes/quote.entities';
 import { ShopSettingsRow } from '../settings/shop-settings.entity';
 import { SignInAddress } from '../auth/sign-in-address.entity';
 import { ActivityEntry } from '../activity/activity.entity';
@@ -28,6 +28,8 @@ import { WeldRuleRevision, WeldRuleRow } from '../welds/weld-rule.entities';
 import { WeldRules1764601200000 } from './migrations/1764601200000-weld-rules';
 import { RunFlangeAlloys1764601210000 } from './migrations/1764601210000-run-flange-alloys';
 import { FlexPartCuff1764601220000 } from './migrations/1764601220000-flex-part-cuff';
+import { QuoteLimitOverrides1764601300000 } from './migrations/1764601300000-quote-limit-overrides';
+import { AlloyReview1764601310000 } from './migrations/1764601310000-alloy-review';
 
 export const ENTITIES = [
   User,
@@ -52,6 +54,7 @@ export const ENTITIES = [
   PaymentEventSeen,
   WeldRuleRow,
   WeldRuleRevision,
+  QuoteLimitOverride,
 ];
 export const MIGRATIONS = [
   UsersAndSessions1764600000000,
@@ -69,6 +72,8 @@ export const MIGRATIONS = [
   WeldRules1764601200000,
   RunFlangeAlloys1764601210000,
   FlexPartCuff1764601220000,
+  QuoteLimitOverrides1764601300000,
+  AlloyReview1764601310000,
 ];
 
 /** `database` is a file path, or ':memory:' for tests. */

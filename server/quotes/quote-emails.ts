@@ -59,17 +59,36 @@ export function quoteMail(f: QuoteMailFacts, to: string): OutgoingMail {
   return { to, subject, text, html };
 }
 
+interface DecisionFacts {
+  number: string;
+  jobName: string;
+  customerName: string;
+  customerCompany?: string;
+  decidedBy: string;
+  accepted: boolean;
+  optionLabel?: string;
+  total?: string;
+  reason?: string;
+  link: string;
+}
+
+/** Who answered, named once: "Oda Kallstrom for Kallstrom Track Days", "Oda Kallstrom", or "Per Lind (quote sent to Oda Kallstrom)". */
+export function whoDecided(f: Pick<DecisionFacts, 'decidedBy' | 'customerName' | 'customerCompany'>): string {
+  if (f.customerCompany) return `${f.decidedBy} for ${f.customerCompany}`;
+  const same = f.decidedBy.trim().toLowerCase() === f.customerName.trim().toLowerCase();
+  return same ? f.decidedBy : `${f.decidedBy} (quote sent to ${f.customerName})`;
+}
+
 /** The note to the salesperson when the customer decides. */
-export function decisionMail(f: { number: string; jobName: string; customerName: string; decidedBy: string; accepted: boolean; optionLabel?: string; total?: string; reason?: string; link: string }, to: string): OutgoingMail {
-  const what = f.accepted ? `accepted option “${f.optionLabel}” (${f.total})` : 'declined the quote';
-  const subject = `Quote ${f.number} ${f.accepted ? 'accepted' : 'declined'} by ${f.customerName}`;
-  const text = [
-    `${f.decidedBy} for ${f.customerName} ${what} on quote ${f.number} (${f.jobName}).`,
-    ...(f.reason ? ['', `Reason given: ${f.reason}`] : []),
-    '',
-    `Open the quote in Dilato: ${f.link}`,
-  ].join('\n');
-  const html = `<p>${escapeHtml(f.decidedBy)} for ${escapeHtml(f.customerName)} ${escapeHtml(what)} on quote <strong>${escapeHtml(f.number)}</strong> (${escapeHtml(f.jobName)}).</p>${
+export function decisionMail(f: DecisionFacts, to: string): OutgoingMail {
+  const who = whoDecided(f);
+  const sentence = f.accepted
+    ? `${who} accepted option “${f.optionLabel}” (${f.total}) on quote ${f.number} (${f.jobName}).`
+    : `${who} declined quote ${f.number} (${f.jobName}).`;
+  const subject = `Quote ${f.number} ${f.accepted ? 'accepted' : 'declined'} by ${f.customerName}${f.customerCompany ? ` (${f.customerCompany})` : ''}`;
+  const text = [sentence, ...(f.reason ? ['', `Reason given: ${f.reason}`] : []), '', `Open the quote in Dilato: ${f.link}`].join('\n');
+  const what = f.accepted ? ` accepted option “${escapeHtml(f.optionLabel ?? '')}” (${escapeHtml(f.total ?? '')}) on quote ` : ' declined quote ';
+  const html = `<p>${escapeHtml(who)}${what}<strong>${escapeHtml(f.number)}</strong> (${escapeHtml(f.jobName)}).</p>${
     f.reason ? `<p>Reason given: ${escapeHtml(f.reason)}</p>` : ''
   }<p><a href="${escapeHtml(f.link)}">Open the quote in Dilato</a></p>`;
   return { to, subject, text, html };

@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { columnType } from '../db/column-types';
 import type { QuotePricing, QuoteStatus } from '../../shared/schemas/quotes';
 
 export interface StoredOption {
@@ -39,4 +40,18 @@ export class QuoteEvent {
   @Column('varchar', { default: '' }) note: string;
   @Column('varchar', { nullable: true }) by: string | null;
   @Column('datetime') at: Date;
+}
+
+/** An engineer's or admin's reason for offering an option that runs over its temperature limit. */
+@Entity({ name: 'quote_limit_override' })
+export class QuoteLimitOverride {
+  @PrimaryColumn('varchar') id: string;
+  @Column('varchar', { name: 'quote_id' }) quoteId: string;
+  @Column('integer', { name: 'option_index' }) optionIndex: number;
+  /** The option's alloys when the override was recorded (`optionKey`); a changed option needs a new one. */
+  @Column('text', { name: 'option_key' }) optionKey: string;
+  @Column('text') reason: string;
+  @Column('varchar', { name: 'by_user_id', nullable: true }) byUserId: string | null;
+  @Column('varchar', { name: 'by_name' }) byName: string;
+  @Column({ type: columnType.time }) at: Date;
 }

@@ -1,6 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { In } from 'typeorm';
-import { Quote, QuoteEvent } from './quote.entities';
+import { Quote, QuoteEvent, QuoteLimitOverride } from './quote.entities';
 import { Store } from '../db/store';
 import { ActivityRows } from '../activity/activity.repository';
 
@@ -49,6 +49,14 @@ export class QuotesRepository {
   }
   addEvent(event: Partial<QuoteEvent>) {
     return this.m.save(QuoteEvent, Object.assign(new QuoteEvent(), event));
+  }
+  limitOverridesOf(quoteId: string) {
+    return this.m.find(QuoteLimitOverride, { where: { quoteId }, order: { optionIndex: 'ASC' } });
+  }
+  /** One override per option: a new reason replaces the old one. */
+  async putLimitOverride(row: QuoteLimitOverride) {
+    await this.m.delete(QuoteLimitOverride, { quoteId: row.quoteId, optionIndex: row.optionIndex });
+    return this.m.save(QuoteLimitOverride, row);
   }
   eventsOf(quoteIds: string[]) {
     return quoteIds.length === 0

@@ -1,5 +1,5 @@
 import { Router, type Request } from 'express';
-import { acceptQuoteSchema, declineQuoteSchema, quoteInputSchema, quotePatchSchema } from '../../shared/schemas/quotes';
+import { acceptQuoteSchema, declineQuoteSchema, limitOverrideSchema, quoteInputSchema, quotePatchSchema } from '../../shared/schemas/quotes';
 import { requireRole, requireSignedIn } from '../auth/session';
 import { parseBody, parsePatch } from '../http/validate';
 import type { QuotesService } from './quotes.service';
@@ -30,6 +30,10 @@ export function quotesRouter(service: QuotesService, publicUrl?: string): Router
   });
   router.get('/:id/email-preview', sellers, async (req, res) => {
     res.json({ email: await service.emailPreview(req.params.id as string, originOf(req, publicUrl)) });
+  });
+  // Engineers and admins vouch for an option over its temperature limit; sales cannot.
+  router.post('/:id/limit-overrides', requireRole('engineer', 'admin'), async (req, res) => {
+    res.status(201).json({ quote: await service.recordLimitOverride(req.params.id as string, parseBody(limitOverrideSchema, req.body), req.user!) });
   });
   router.post('/:id/send', sellers, async (req, res) => {
     res.json({ quote: await service.send(req.params.id as string, req.user!, originOf(req, publicUrl)) });

@@ -2,9 +2,10 @@ import { createHash, randomBytes, randomUUID } from 'node:crypto';
 import { toShopCurrency } from '../../shared/currency/convert';
 import { peakTempC } from '../../shared/engine/limits';
 import { compareWithFirst, priceOption, type PricedAlloy, type PricedRunInput } from '../../shared/quotes/pricing';
-import { FAMILY_LABELS } from '../../shared/schemas/alloy';
 import type { PublicUser } from '../../shared/schemas/auth';
-import type { PublicQuoteView, QuoteInput, QuotePricing, QuoteStatus, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
+import { optionKey, optionLimitState } from '../../shared/quotes/limit-cautions';
+import { overridesInForce, requireOverrides } from './limit-overrides';
+import type { LimitOverrideInput, PublicQuoteView, QuoteInput, QuotePricing, QuoteStatus, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
 import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
 import type { CurrencyRatesService } from '../currency/currency-rates.service';
 import type { ActivityView } from '../../shared/schemas/activity';
@@ -15,7 +16,8 @@ import type { Mailer } from '../mail/mailer';
 import type { ShopSettingsService } from '../settings/shop-settings.service';
 import type { UsersRepository } from '../users/users.repository';
 import { decisionMail, money, quoteMail } from './quote-emails';
-import { Quote } from './quote.entities';
+import { Quote, QuoteLimitOverride } from './quote.entities';
+import { overrideFor, publicOptions } from './public-options';
 import type { QuotesRepository, QuotesStore } from './quotes.repository';
 import type { DepositView } from '../../shared/schemas/deposits';
 
@@ -135,6 +137,7 @@ export class QuotesService {
       }
     }
     const [job, events] = await Promise.all([this.jobs.read().findJob(quote.jobId), repo.eventsOf([quote.id])]);
+    const limitOverrides = quote.snapshot ? (quote.snapshot.limitOverrides ?? []) : await overridesInForce(repo, quote);
     return {
       id: quote.id,
       number: quote.number,
@@ -155,6 +158,7 @@ export class QuotesService {
       createdAt: new Date(quote.createdAt).toISOString(),
       sentAt: quote.sentAt ? new Date(quote.sentAt).toISOString() : null,
       events: events.map((e) => ({ at: new Date(e.at).toISOString(), status: e.status, note: e.note, by: e.by })),
+      limitOverrides,
       deposit: await this.depositOf(quote),
     };
   }
@@ -198,6 +202,34 @@ export class QuotesService {
     const repo = this.store.read();
     if (!(await repo.find(id))) throw AppError.notFound('There is no such quote.');
     return (await repo.activity.list({ subject: 'quote', subjectId: id })).map(activityView);
+  }
+
+  // ---- temperature limit overrides ----
+
+  /** An engineer or admin vouches for an option over its temperature limit, with the reason; written in the quote's history. */
+  async recordLimitOverride(id: string, input: LimitOverrideInput, actor: Actor): Promise<QuoteView> {
+    return this.store.write(async (repo) => {
+      const quote = await repo.find(id);
+      if (!quote) throw AppError.notFound('There is no such quote.');
+      if (quote.status !== 'draft') throw AppError.conflict('not_draft', 'A sent quote cannot be changed; make a new one.');
+      const spec = quote.options[input.optionIndex];
+      if (!spec) throw AppError.badRequest('invalid_input', 'Choose one of the options.', { optionIndex: 'There is no such option' });
+      const priced = (await this.priceNow(quote)).options[input.optionIndex];
+      if (optionLimitState(priced) !== 'over') {
+        throw AppError.badRequest('not_over_limit', `Option ${input.optionIndex + 1} is within its temperature limit; it needs no override.`, { optionIndex: 'Within its limit' });
+      }
+      const at = new Date();
+      await repo.putLimitOverride(
+        Object.assign(new QuoteLimitOverride(), { id: randomUUID(), quoteId: id, optionIndex: input.optionIndex, optionKey: optionKey(spec), reason: input.reason, byUserId: actor.id, byName: actor.name, at }),
+      );
+      const over = Math.round(-priced.tempMarginC);
+      await repo.addEvent({ id: randomUUID(), quoteId: id, status: 'draft', note: `Limit override for option ${input.optionIndex + 1} (${spec.label}, ${over} °C over): ${input.reason}`, by: actor.name, at });
+      await repo.activity.add(
+        { subject: 'quote', subjectId: id, subjectName: quote.number, jobId: null, action: 'limit_overridden', changes: [{ path: `options.${input.optionIndex}.limitOverride`, before: null, after: input.reason }] },
+        actor,
+      );
+      return this.view(repo, quote);
+    });
   }
 
   // ---- sales ----
@@ -272,7 +304,8 @@ export class QuotesService {
       if (!quote) throw AppError.notFound('There is no such quote.');
       if (quote.status !== 'draft') throw AppError.conflict('not_draft', 'This quote has already been sent.');
       if (quote.validUntil < today()) throw AppError.badRequest('invalid_input', 'The quote’s date has passed.', { validUntil: 'Choose a date from today on' });
-      const pricing: QuotePricing = { ...(await this.priceNow(quote)), frozen: true };
+      const priced = await this.priceNow(quote);
+      const pricing: QuotePricing = { ...priced, frozen: true, limitOverrides: requireOverrides(priced, await overridesInForce(repo, quote)) };
       const { jobName } = await this.jobRuns(quote.jobId);
       if (!(await repo.markSent(id, { snapshot: pricing, tokenHash, sentAt: new Date() }))) {
         throw AppError.conflict('not_draft', 'This quote has already been sent.');
@@ -307,9 +340,7 @@ export class QuotesService {
 
   private async publicView(quote: Quote): Promise<PublicQuoteView> {
     const pricing = quote.snapshot!;
-    const alloys = new Map(pricing.alloys.map((a) => [a.alloyId, a]));
     const { jobName } = await this.jobRuns(quote.jobId).catch(() => ({ jobName: 'your system' }));
-    const hottest = Math.max(...pricing.runs.map((r) => r.peakTempC));
     return {
       number: quote.number,
       shopName: pricing.settings.shopName,
@@ -322,34 +353,7 @@ export class QuotesService {
       currency: pricing.currency,
       acceptedOptionIndex: quote.acceptedOptionIndex,
       deposit: await this.depositOf(quote),
-      options: pricing.options.map((o, i) => ({
-        label: o.label,
-        total: o.total,
-        costDifference: pricing.comparisons[i].costDifference,
-        costDifferencePct: pricing.comparisons[i].costDifferencePct,
-        massKg: o.massKg,
-        massDifferenceKg: pricing.comparisons[i].massDifferenceKg,
-        tempMarginC: o.tempMarginC,
-        tempMarginGainedC: pricing.comparisons[i].tempMarginGainedC,
-        alloys: [...new Set(o.runs.map((r) => r.alloyId))].map((id) => {
-          const a = alloys.get(id)!;
-          const limit = Math.min(a.maxContinuousC, a.maxIntermittentC);
-          const hand = limit - hottest;
-          return {
-            designation: a.designation,
-            uns: a.uns,
-            familyLabel: FAMILY_LABELS[a.family],
-            serviceLimitC: limit,
-            densityKgM3: a.densityKgM3,
-            plainWords:
-              `${a.designation} (${FAMILY_LABELS[a.family].toLowerCase()}) is good for about ${Math.round(limit)} °C in air. ` +
-              (hand >= 0
-                ? `The hottest part of your system runs at about ${Math.round(hottest)} °C, which leaves ${Math.round(hand)} °C in hand.`
-                : `The hottest part of your system runs at about ${Math.round(hottest)} °C, above what it is rated for: ask us before choosing it there.`) +
-              ` It weighs ${(a.densityKgM3 / 1000).toFixed(2)} kg per litre of metal.`,
-          };
-        }),
-      })),
+      options: publicOptions(pricing),
     };
   }
 
@@ -373,6 +377,11 @@ export class QuotesService {
       if (decision.accept && !pricing.options[decision.optionIndex]) {
         throw AppError.badRequest('invalid_input', 'Choose one of the options.', { optionIndex: 'There is no such option' });
       }
+      if (decision.accept && optionLimitState(pricing.options[decision.optionIndex]) === 'over' && !overrideFor(pricing.limitOverrides, decision.optionIndex)) {
+        throw AppError.conflict('over_limit', `Option ${decision.optionIndex + 1} runs over its material’s temperature limit and cannot be accepted here. Please ask ${pricing.settings.shopName} about it.`, {
+          optionIndex: 'Over its temperature limit',
+        });
+      }
       const status: QuoteStatus = decision.accept ? 'accepted' : 'declined';
       Object.assign(quote, { status, acceptedOptionIndex: decision.accept ? decision.optionIndex : null, decidedBy: decision.name, updatedAt: new Date() });
       await repo.save(quote);
@@ -391,6 +400,7 @@ export class QuotesService {
             number: result.number,
             jobName,
             customerName: result.customerName,
+            customerCompany: result.customerCompany,
             decidedBy: decision.name,
             accepted: decision.accept,
             optionLabel: option?.label,

@@ -1,4 +1,4 @@
-import type { AlloyInput } from '../schemas/alloy';
+import type { AlloyInput, AlloyVersionView } from '../schemas/alloy';
 
 export interface DiffEntry {
   path: string;
@@ -47,4 +47,16 @@ export function diffAlloy(before: Comparable | null, after: Comparable): DiffEnt
     }
   }
   return entries;
+}
+
+/** A version's data without its bookkeeping (number, state, who and when), as diffs compare it. */
+export function stripMeta(v: AlloyVersionView | null): AlloyInput | null {
+  if (!v) return null;
+  const { versionId: _a, version: _b, state: _c, createdAt: _d, createdBy: _e, publishedAt: _f, publishedBy: _g, ...input } = v;
+  return input;
+}
+
+/** The open draft against the published version, computed where both are at hand (no request of its own). */
+export function draftChanges(published: AlloyVersionView | null, draft: AlloyVersionView): DiffEntry[] {
+  return diffAlloy(stripMeta(published), stripMeta(draft)!);
 }

@@ -2,7 +2,7 @@
 export const ACTIVITY_SUBJECTS = ['job', 'run', 'quote'] as const;
 export type ActivitySubject = (typeof ACTIVITY_SUBJECTS)[number];
 
-export type ActivityAction = 'created' | 'edited' | 'archived' | 'unarchived' | 'deleted' | 'duplicated' | 'reordered' | 'sent' | 'refunded';
+export type ActivityAction = 'created' | 'edited' | 'archived' | 'unarchived' | 'deleted' | 'duplicated' | 'reordered' | 'sent' | 'refunded' | 'limit_overridden';
 
 export interface ActivityChange {
   path: string;

@@ -232,11 +232,45 @@ export interface AlloyDetail {
   draft: AlloyVersionView | null;
   sources: SourceView[];
   datasheets: DatasheetView[];
+  /** Where the open draft stands in review; null without a draft or before it is submitted. */
+  review: AlloyReviewState | null;
 }
+
+export type ReviewStep = 'submitted' | 'sent_back';
+
+/** One line of an alloy's version list. */
+export interface AlloyVersionSummary {
+  version: number;
+  state: 'draft' | 'published' | 'superseded';
+  designation: string;
+  publishedAt: string | null;
+  createdAt: string;
+}
+
+export interface AlloyReviewState {
+  step: ReviewStep;
+  note: string;
+  by: string | null;
+  at: string;
+}
+
+/** One draft waiting for an admin. */
+export interface ReviewQueueItem {
+  alloyId: string;
+  designation: string;
+  uns: string;
+  version: number;
+  isNew: boolean;
+  submittedBy: string | null;
+  submittedAt: string;
+  note: string;
+}
+
+export type RevisionAction = 'created' | 'edited' | 'published' | 'retired' | 'restored' | 'datasheet_added' | 'datasheet_removed' | 'submitted' | 'sent_back';
 
 export interface RevisionView {
   id: string;
-  action: 'created' | 'edited' | 'published' | 'retired' | 'restored' | 'datasheet_added';
+  action: RevisionAction;
   version: number | null;
   at: string;
   by: string | null;
@@ -248,3 +282,10 @@ export interface FlexPartView extends FlexPartInput {
   id: string;
   isDemo: boolean;
 }
+
+/** The note beside a review step: needed to publish or send back, optional when submitting. */
+export function reviewNoteSchema(required: boolean) {
+  const text = z.string({ error: 'Write a note' }).trim().max(500, { error: 'Use at most 500 characters' });
+  return z.object({ note: required ? text.min(1, { error: 'Write a note for the history' }) : text });
+}
+export type ReviewNote = z.infer<ReturnType<typeof reviewNoteSchema>>;

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import type { ShopSettings } from './shop-settings';
 import type { OptionComparison, PricedAlloy, PricedOption, PricedRunInput } from '../quotes/pricing';
 import { emailSchema } from './auth';
+import type { OptionLimitState } from '../quotes/limit-cautions';
 import type { DepositView } from './deposits';
 
 export const QUOTE_STATUSES = ['draft', 'sent', 'viewed', 'accepted', 'declined', 'expired'] as const;
@@ -50,6 +51,24 @@ export const declineQuoteSchema = z.object({
   reason: z.string().trim().max(1000).default(''),
 });
 
+/** An engineer's or admin's reason for offering an option that runs over its temperature limit. */
+export const limitOverrideSchema = z.object({
+  optionIndex: z.number({ error: 'Choose an option' }).int().min(0).max(3),
+  reason: z
+    .string({ error: 'Give the reason' })
+    .trim()
+    .min(10, { error: 'Say why in a sentence (at least 10 characters)' })
+    .max(500, { error: 'Use at most 500 characters' }),
+});
+export type LimitOverrideInput = z.infer<typeof limitOverrideSchema>;
+
+export interface LimitOverrideView {
+  optionIndex: number;
+  reason: string;
+  by: string;
+  at: string;
+}
+
 /** Prices, alloys and runs as they stood when the quote was sent (or as they stand now, for a draft). */
 export interface QuotePricing {
   currency: string;
@@ -60,6 +79,8 @@ export interface QuotePricing {
   comparisons: OptionComparison[];
   pricedAt: string;
   frozen: boolean;
+  /** The limit overrides in force when the quote was sent (absent on quotes sent before overrides existed). */
+  limitOverrides?: LimitOverrideView[];
 }
 
 export interface QuoteEventView {
@@ -90,6 +111,8 @@ export interface QuoteView {
   createdAt: string;
   sentAt: string | null;
   events: QuoteEventView[];
+  /** Overrides for options over their temperature limit: those still matching a draft's options, or those frozen at sending. */
+  limitOverrides: LimitOverrideView[];
   /** The deposit asked for on acceptance; null when none is asked. */
   deposit?: DepositView | null;
 }
@@ -132,6 +155,11 @@ export interface PublicQuoteView {
     massDifferenceKg: number;
     tempMarginC: number;
     tempMarginGainedC: number;
-    alloys: { designation: string; uns: string; familyLabel: string; serviceLimitC: number; densityKgM3: number; plainWords: string }[];
+    limitState: OptionLimitState;
+    /** The temperature caution in plain words, for an option over or near its limit. */
+    limitCaution: string | null;
+    /** False for an option over its limit that nobody at the shop has vouched for. */
+    acceptable: boolean;
+    alloys: { designation: string; uns: string; familyLabel: string; serviceLimitC: number; plainWords: string }[];
   }[];
 }

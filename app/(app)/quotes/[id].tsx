@@ -4,6 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import { DepositPanel } from '../../../components/quotes/deposit-panel';
 import { EmailPreviewSection } from '../../../components/quotes/email-preview-section';
 import { HistoryCard, QuoteDetail } from '../../../components/quotes/quote-detail';
+import { LimitOverridePanel } from '../../../components/quotes/limit-override-panel';
 import { QuoteBuilder } from '../../../components/quotes/quote-builder';
 import { QuoteHeader } from '../../../components/quotes/quote-header';
 import { SendPanel } from '../../../components/quotes/send-panel';
@@ -14,7 +15,7 @@ import { LoadingState } from '../../../components/ui/loading-state';
 import { Screen } from '../../../components/ui/screen';
 import { layout, spacing } from '../../../constants/theme';
 import { isApiError, messageOf } from '../../../hooks/api-client';
-import { useQuoteActivityQuery, useQuoteQuery, useSendQuoteMutation, useUpdateQuoteMutation } from '../../../hooks/use-quotes';
+import { useLimitOverrideMutation, useQuoteActivityQuery, useQuoteQuery, useSendQuoteMutation, useUpdateQuoteMutation } from '../../../hooks/use-quotes';
 import { useSessionQuery } from '../../../hooks/use-session';
 import type { QuoteView } from '../../../shared/schemas/quotes';
 import { useScreenTitle } from '../../../components/ui/use-screen-title';
@@ -42,11 +43,18 @@ export default function QuoteScreen() {
   return (
     <Screen wide>
       <QuoteHeader quote={quote.data} />
+      <LimitsSection quote={quote.data} canOverride={(me.role === 'engineer' || me.role === 'admin') && quote.data.status === 'draft'} />
       {quote.data.status === 'draft' && canSell ? <DraftEditor quote={quote.data} /> : <QuoteDetail quote={quote.data} />}
       {quote.data.deposit ? <DepositPanel quoteId={quote.data.id} deposit={quote.data.deposit} canRefund={me.role === 'admin'} /> : null}
       <ActivitySection intro="Who created, changed and sent this quote." query={activity} />
     </Screen>
   );
+}
+
+function LimitsSection({ quote, canOverride }: { quote: QuoteView; canOverride: boolean }) {
+  const override = useLimitOverrideMutation(quote.id);
+  if (!quote.pricing) return null;
+  return <LimitOverridePanel options={quote.pricing.options} overrides={quote.limitOverrides} canOverride={canOverride} onOverride={(input) => override.mutateAsync(input)} />;
 }
 
 function DraftEditor({ quote }: { quote: QuoteView }) {

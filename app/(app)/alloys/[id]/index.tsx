@@ -22,11 +22,13 @@ import { SegmentedControl } from '../../../../components/ui/segmented-control';
 import { Text } from '../../../../components/ui/text';
 import { spacing } from '../../../../constants/theme';
 import { messageOf } from '../../../../hooks/api-client';
-import { useAlloyQuery, useAlloyReviewQuery, useAlloyRevisionsQuery, useAlloyStatusMutation } from '../../../../hooks/use-alloys';
+import { draftChanges } from '../../../../shared/catalogue/alloy-diff';
+import { useAlloyQuery, useAlloyRevisionsQuery, useAlloyStatusMutation, useReviewStepMutation } from '../../../../hooks/use-alloys';
+import { SubmitForReview } from '../../../../components/alloys/review-step-forms';
 import { useSessionQuery } from '../../../../hooks/use-session';
 import { useSourcesQuery } from '../../../../hooks/use-sources';
-import { useUploadDatasheetMutation } from '../../../../hooks/use-upload';
 import { useScreenTitle } from '../../../../components/ui/use-screen-title';
+import { useRemoveDatasheetMutation, useUploadDatasheetMutation } from '../../../../hooks/use-upload';
 
 type Shown = 'published' | 'draft';
 
@@ -38,9 +40,10 @@ export default function AlloyDetailScreen() {
   const units = useUnits();
   const alloy = useAlloyQuery(id);
   const revisions = useAlloyRevisionsQuery(id);
-  const review = useAlloyReviewQuery(id, canEdit && Boolean(alloy.data?.draft));
   const upload = useUploadDatasheetMutation(id ?? '');
   const status = useAlloyStatusMutation(id ?? '');
+  const reviewStep = useReviewStepMutation(id ?? '');
+  const removeSheet = useRemoveDatasheetMutation(id ?? '');
   const allSources = useSourcesQuery();
   const [choice, setChoice] = useState<Shown>('published');
 
@@ -80,13 +83,8 @@ export default function AlloyDetailScreen() {
               ? 'Not published yet: everyone else still works from the published data.'
               : 'This alloy has never been published; only engineers and admins can see it.'}
           </Text>
-          {detail.published ? (
-            review.data ? (
-              <DiffList diff={review.data.diff} sources={sources} units={units} label="Draft changes" />
-            ) : review.isError ? (
-              <ErrorBanner message={messageOf(review.error)} />
-            ) : null
-          ) : null}
+          {detail.published ? <DiffList diff={draftChanges(detail.published, detail.draft)} sources={sources} units={units} label="Draft changes" /> : null}
+          <SubmitForReview review={detail.review} onSubmit={(note) => reviewStep.mutateAsync({ action: 'submit', note })} />
           <View style={styles.links}>
             <TextLink href={`/alloys/${detail.id}/edit`} label="Edit draft" />
             {isAdmin ? <TextLink href={`/alloys/${detail.id}/review`} label="Review and publish" /> : null}
@@ -126,9 +124,10 @@ export default function AlloyDetailScreen() {
           datasheets={detail.datasheets}
           upload={
             canEdit
-              ? { onUpload: (file) => upload.mutateAsync(file), progress: upload.progress, uploading: upload.isPending }
+              ? { onUpload: (file) => upload.mutateAsync(file), onCancel: upload.cancel, progress: upload.progress, uploading: upload.isPending }
               : undefined
           }
+          onRemove={canEdit ? (sheet) => removeSheet.mutateAsync(sheet.id) : undefined}
         />
       </Section>
 
@@ -138,12 +137,14 @@ export default function AlloyDetailScreen() {
             status={detail.status}
             hasDraft={Boolean(detail.draft)}
             hasPublished={Boolean(detail.published)}
+            publishQuestion={detail.draft ? `Publish draft version ${detail.draft.version} of ${detail.draft.designation}?` : undefined}
             onAction={(action, note) => status.mutateAsync({ action, note })}
           />
         </Section>
       ) : null}
 
       <Section title="Revision history">
+        {detail.published && detail.published.version > 1 ? <TextLink href={`/alloys/${detail.id}/versions`} label="Browse past versions" /> : null}
         {revisions.isPending ? (
           <LoadingState label="Loading the history…" />
         ) : revisions.isError ? (

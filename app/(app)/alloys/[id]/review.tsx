@@ -12,7 +12,9 @@ import { LoadingState } from '../../../../components/ui/loading-state';
 import { Screen } from '../../../../components/ui/screen';
 import { Text } from '../../../../components/ui/text';
 import { isApiError, messageOf } from '../../../../hooks/api-client';
-import { useAlloyReviewQuery, useAlloyStatusMutation } from '../../../../hooks/use-alloys';
+import { useAlloyReviewQuery, useAlloyStatusMutation, useReviewStepMutation } from '../../../../hooks/use-alloys';
+import { SendBackForm } from '../../../../components/alloys/review-step-forms';
+import { useState } from 'react';
 import { useSourcesQuery } from '../../../../hooks/use-sources';
 
 export default function ReviewAlloyScreen() {
@@ -26,9 +28,12 @@ export default function ReviewAlloyScreen() {
 function ReviewAlloy() {
   const { id } = useLocalSearchParams<{ id: string }>();
   const router = useRouter();
-  const review = useAlloyReviewQuery(id);
+  // Stopped once publishing starts: the draft is gone afterwards and asking for it again would answer 409.
+  const [publishing, setPublishing] = useState(false);
+  const review = useAlloyReviewQuery(id, !publishing);
   const sources = useSourcesQuery();
   const status = useAlloyStatusMutation(id ?? '');
+  const reviewStep = useReviewStepMutation(id ?? '');
   const back = <TextLink href={`/alloys/${id}`} label="← Back to the alloy" accessibilityLabel="Back to the alloy" />;
 
   if (review.isPending) return <LoadingState label="Loading the draft…" />;
@@ -73,8 +78,27 @@ function ReviewAlloy() {
           hasDraft
           hasPublished={Boolean(published)}
           only={['publish']}
+          publishQuestion={`Publish draft version ${draft.version} of ${draft.designation}?`}
           onAction={async (action, note) => {
-            await status.mutateAsync({ action, note });
+            setPublishing(true);
+            try {
+              await status.mutateAsync({ action, note });
+            } catch (error) {
+              setPublishing(false);
+              throw error;
+            }
+            router.replace(`/alloys/${id}`);
+          }}
+        />
+      </Card>
+      <Card>
+        <Text variant="heading" headingLevel={2}>
+          Send back
+        </Text>
+        <Text tone="muted">Not ready? Send the draft back to the engineer with a note saying what to change. It stays a draft.</Text>
+        <SendBackForm
+          onSendBack={async (note) => {
+            await reviewStep.mutateAsync({ action: 'send-back', note });
             router.replace(`/alloys/${id}`);
           }}
         />
