@@ -42,6 +42,8 @@ export class AlloyVersion {
   @Column('integer') version: number;
   @Column('varchar') state: 'draft' | 'published' | 'superseded';
   @Column('varchar') designation: string;
+  /** `designationKey(designation)`: what the list sorts by. */
+  @Column('varchar', { name: 'designation_key', default: '' }) designationKey: string;
   @Column('varchar') uns: string;
   @Column('varchar') family: AlloyFamily;
   @Column('real', { name: 'density_kg_m3' }) densityKgM3: number;

@@ -24,6 +24,10 @@ import { CurrencyRates1764600510000 } from './migrations/1764600510000-currency-
 import { CurrencyRate } from '../currency/currency-rate.entity';
 import { Deposit, PaymentEventSeen } from '../payments/deposit.entities';
 import { QuoteDeposits1764600900000 } from './migrations/1764600900000-quote-deposits';
+import { CacheStamp } from '../cache/cache-stamp.entity';
+import { ListIndexes1764601600000 } from './migrations/1764601600000-list-indexes';
+import { DesignationKey1764601610000 } from './migrations/1764601610000-designation-key';
+import { CacheStamps1764601620000 } from './migrations/1764601620000-cache-stamps';
 
 export const ENTITIES = [
   User,
@@ -46,6 +50,7 @@ export const ENTITIES = [
   ActivityEntry,
   Deposit,
   PaymentEventSeen,
+  CacheStamp,
 ];
 export const MIGRATIONS = [
   UsersAndSessions1764600000000,
@@ -60,6 +65,9 @@ export const MIGRATIONS = [
   Activity1764600610000,
   RunSupportsAndNearby1764600700000,
   QuoteDeposits1764600900000,
+  ListIndexes1764601600000,
+  DesignationKey1764601610000,
+  CacheStamps1764601620000,
 ];
 
 /** `database` is a file path, or ':memory:' for tests. */

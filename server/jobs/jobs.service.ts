@@ -25,7 +25,8 @@ import { AppError } from '../http/app-error';
 import { fieldsFromZod } from '../http/validate';
 import { Job, JobRun } from './job.entities';
 import type { JobsRepository, JobsStore } from './jobs.repository';
-import { jobSummary, jobView, runFieldsOf, runView } from './jobs.views';
+import { briefRun } from './brief-results';
+import { jobSummary, jobView, revisionOf, runFieldsOf, runView } from './jobs.views';
 import type { Computed, ResultSession, RunResults } from './run-results';
 
 /** Gives runs positions 1..n in the order given; returns the runs whose position changed. */
@@ -64,24 +65,32 @@ export class JobsService {
   // ---- reading ----
 
   private async computeAll(session: ResultSession, runs: JobRun[]): Promise<RunView[]> {
-    return Promise.all(runs.map(async (run) => runView(run, await session.compute(runFieldsOf(run)))));
+    return Promise.all(runs.map((run) => this.answer(session, run)));
   }
 
-  async list(query: JobListQuery): Promise<{ items: JobSummary[]; total: number }> {
+  /** One page of jobs; only the runs of the jobs on the page are read and computed (results cached per run revision). */
+  async list(query: JobListQuery): Promise<{ items: JobSummary[]; total: number; page: number; pageSize: number }> {
     const repo = this.store.read();
-    const jobs = await repo.listJobs(query);
+    const [jobs, total] = await repo.listJobs(query);
     const runs = await repo.runsOfJobs(jobs.map((j) => j.id));
-    const session = this.results.session();
-    const views = await this.computeAll(session, runs);
-    const items = jobs.map((job) => jobSummary(job, jobTotals(views.filter((r) => r.jobId === job.id))));
-    return { items, total: items.length };
+    const views = await this.computeAll(this.results.session(), runs);
+    const byJob = new Map<string, RunView[]>(jobs.map((j) => [j.id, []]));
+    for (const view of views) byJob.get(view.jobId)!.push(view);
+    const items = jobs.map((job) => jobSummary(job, jobTotals(byJob.get(job.id)!)));
+    return { items, total, page: query.page, pageSize: query.pageSize };
   }
 
-  private async detailIn(repo: JobsRepository, job: Job): Promise<JobDetail> {
+  private async detailIn(repo: JobsRepository, job: Job, full = false): Promise<JobDetail> {
     const [runs, names] = await Promise.all([repo.runsOf(job.id), repo.userNames(job.createdBy ? [job.createdBy] : [])]);
     const session = this.results.session();
     const views = await this.computeAll(session, runs);
-    return { ...jobView(job, names), runs: views, totals: jobTotals(views), system: checkSystem(views, await session.systemBasis()) };
+    return {
+      ...jobView(job, names),
+      runs: full ? views : views.map(briefRun),
+      totals: jobTotals(views),
+      system: checkSystem(views, await session.systemBasis()),
+      resultDetail: full ? 'full' : 'brief',
+    };
   }
 
   private async jobIn(repo: JobsRepository, id: string): Promise<Job> {
@@ -96,14 +105,14 @@ export class JobsService {
     return run;
   }
 
-  async detail(id: string): Promise<JobDetail> {
+  /** The job and its runs; with `full`, each result with its charts' curves and every flex candidate. */
+  async detail(id: string, full = false): Promise<JobDetail> {
     const repo = this.store.read();
-    return this.detailIn(repo, await this.jobIn(repo, id));
+    return this.detailIn(repo, await this.jobIn(repo, id), full);
   }
 
   async run(id: string): Promise<RunView> {
-    const run = await this.runIn(this.store.read(), id);
-    return runView(run, await this.results.session().compute(runFieldsOf(run)));
+    return this.answer(this.results.session(), await this.runIn(this.store.read(), id));
   }
 
   /** The run computed with each candidate alloy and with its own, and each candidate's difference from its own. */
@@ -118,13 +127,14 @@ export class JobsService {
       });
     }
     const fields = runFieldsOf(run);
+    const revision = revisionOf(run);
     // The joint is left out: the figures compared do not depend on it, and a slip member's data must not veto a candidate.
     const opts = { withJoint: false };
-    const current = await session.compute(fields, fields.alloyId, opts);
+    const current = await session.compute(fields, fields.alloyId, opts, revision);
     const base = figuresOf(current);
     const candidates = await Promise.all(
       alloyIds.map(async (alloyId): Promise<CompareRow> => {
-        const c = await session.compute(fields, alloyId, opts);
+        const c = await session.compute(fields, alloyId, opts, revision);
         const figures = figuresOf(c);
         const difference =
           figures && base
@@ -212,7 +222,7 @@ export class JobsService {
   }
 
   private async answer(session: ResultSession, run: JobRun): Promise<RunView> {
-    return runView(run, await session.compute(runFieldsOf(run)));
+    return runView(run, await session.compute(runFieldsOf(run), run.alloyId, { withJoint: true }, revisionOf(run)));
   }
 
   private newRun(jobId: string, fields: RunFields, position: number): JobRun {

@@ -32,7 +32,7 @@ const named = (a: AlloyUsed) => `${a.designation} (${a.uns})`;
  */
 export class ResultSession {
   private readonly alloys = new Map<string, Promise<AlloyLookup>>();
-  private flexParts: Promise<FlexPart[]> | null = null;
+  private flexParts: Promise<{ stamp: number; parts: FlexPart[] }> | null = null;
   private design: Promise<DesignBasis> | null = null;
   private rates: ReturnType<CurrencyRatesService['converter']> | null = null;
 
@@ -41,6 +41,7 @@ export class ResultSession {
     private readonly flex: FlexPartsService,
     private readonly settings: ShopSettingsService,
     private readonly currencyRates?: CurrencyRatesService,
+    private readonly cache?: ResultCache,
   ) {}
 
   private designBasis(): Promise<DesignBasis> {
@@ -89,19 +90,24 @@ export class ResultSession {
     return { state: 'missing' };
   }
 
-  private parts(): Promise<FlexPart[]> {
-    this.flexParts ??= this.flex.forSizing();
+  private parts(): Promise<{ stamp: number; parts: FlexPart[] }> {
+    this.flexParts ??= this.flex.forSizingStamped();
     return this.flexParts;
   }
 
-  /** The run computed with `alloyId`'s latest published data (the run's own alloy unless a candidate is given). */
-  async compute(run: RunFields, alloyId = run.alloyId, opts: { withJoint: boolean } = { withJoint: true }): Promise<Computed> {
+  /**
+   * The run computed with `alloyId`'s latest published data (the run's own alloy unless a candidate is given).
+   * With a `revision` (the stored run's id and last change), the result is kept for the same run revision,
+   * alloy versions, flex parts and design basis.
+   */
+  async compute(run: RunFields, alloyId = run.alloyId, opts: { withJoint: boolean } = { withJoint: true }, revision?: string): Promise<Computed> {
     const main = await this.alloy(alloyId);
     if (main.state !== 'published') {
       return { alloy: main.state === 'retired' ? main.used : null, result: null, problem: unavailable(main, 'alloyId', 'this run'), currency: null };
     }
     const fields: RunFields = { ...run, alloyId, joint: opts.withJoint ? run.joint : { type: 'none' } };
     const slipAlloys: { inner?: AlloyData; outer?: AlloyData } = {};
+    const slipVersions: string[] = [];
     if (fields.joint.type === 'slip') {
       for (const side of ['inner', 'outer'] as const) {
         const id = fields.joint[side].alloyId;
@@ -111,12 +117,16 @@ export class ResultSession {
           return { alloy: main.used, result: null, problem: unavailable(member, `joint.${side}.alloyId`, `the slip joint's ${side} member`), currency: null };
         }
         slipAlloys[side] = member.published.data;
+        slipVersions.push(`${side}:${member.published.versionId}`);
       }
     }
-    const flexParts = fields.joint.type === 'flex' ? await this.parts() : undefined;
+    const flex = fields.joint.type === 'flex' ? await this.parts() : undefined;
     const design = fields.joint.type === 'none' ? undefined : await this.designBasis();
     try {
-      const priced = await this.inShopCurrency(calculateRun(toCalcRequest(fields), main.published.data, { flexParts, slipAlloys, design }), main.published.currency);
+      const calculate = () => calculateRun(toCalcRequest(fields), main.published.data, { flexParts: flex?.parts, slipAlloys, design });
+      const key = revision && [revision, opts.withJoint, main.published.versionId, slipVersions.join(','), flex?.stamp, design && JSON.stringify(design)].join('|');
+      const result = key && this.cache ? this.cache.get(key, calculate) : calculate();
+      const priced = await this.inShopCurrency(result, main.published.currency);
       return { alloy: main.used, result: priced.result, problem: null, currency: priced.currency };
     } catch (err) {
       if (!isEngineInputError(err)) throw err;
@@ -151,7 +161,25 @@ function unavailable(lookup: Exclude<AlloyLookup, { state: 'published' }>, field
   };
 }
 
+/** Results of stored runs by key (run revision, alloy versions, flex parts stamp, design basis); the oldest go first. */
+export class ResultCache {
+  private readonly results = new Map<string, RunResult>();
+
+  constructor(private readonly maxEntries = 3000) {}
+
+  get(key: string, calculate: () => RunResult): RunResult {
+    const found = this.results.get(key);
+    if (found) return found;
+    const result = calculate();
+    if (this.results.size >= this.maxEntries) this.results.delete(this.results.keys().next().value!);
+    this.results.set(key, result);
+    return result;
+  }
+}
+
 export class RunResults {
+  private readonly cache = new ResultCache();
+
   constructor(
     private readonly catalogue: CatalogueService,
     private readonly flexParts: FlexPartsService,
@@ -160,6 +188,6 @@ export class RunResults {
   ) {}
 
   session(): ResultSession {
-    return new ResultSession(this.catalogue, this.flexParts, this.settings, this.currencyRates);
+    return new ResultSession(this.catalogue, this.flexParts, this.settings, this.currencyRates, this.cache);
   }
 }
