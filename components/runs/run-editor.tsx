@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm, useWatch } from 'react-hook-form';
+import { Controller, useForm, useWatch, type Control } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { layout, spacing } from '../../constants/theme';
 import { isApiError, messageOf } from '../../hooks/api-client';
@@ -20,10 +20,9 @@ import { NearbyField } from './nearby-field';
 import { SupportsField } from './supports-field';
 import { flattenErrors, mergeMessages, type FieldMessages } from './field-errors';
 import { JointFields } from './joint-fields';
-import { RunResults } from './run-results';
+import { LiveRunResults } from './live-run-results';
 import { SegmentsField } from './segments-field';
 import { TubeFields } from './tube-fields';
-import { useDebounced, useLiveResult } from './use-live-result';
 
 const FIXING_CHOICES = FIXED_POINTS.map((p) => ({ value: p.id, label: p.label }));
 
@@ -50,12 +49,8 @@ export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabe
     reset,
     formState: { errors, isSubmitting, isDirty },
   } = useForm<RunFields>({ resolver: zodResolver(runFieldsSchema), defaultValues });
-  const values = useWatch({ control }) as RunFields;
-  const settled = useDebounced(values);
-  const live = useLiveResult(settled);
-  const engineFields = live.state === 'outside' ? live.fields : {};
+  const [engineFields, setEngineFields] = useState<FieldMessages>({});
   const messages = mergeMessages(serverFields, flattenErrors(errors), engineFields);
-  const peakC = Math.max(...values.segments.flatMap((s) => [s.startTempC, s.endTempC]).filter(Number.isFinite));
 
   const submit = handleSubmit(
     async (v) => {
@@ -134,13 +129,7 @@ export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabe
             <ChoicePicker label="End held by" choices={FIXING_CHOICES} value={value} onChange={onChange} error={messages.endFixing} disabled={!editable} />
           )}
         />
-        <Controller
-          control={control}
-          name="joint"
-          render={({ field: { value, onChange } }) => (
-            <JointFields value={value} onChange={onChange} peakC={peakC} tubeOdMm={values.tube.odMm} units={units} errors={messages} disabled={!editable} />
-          )}
-        />
+        <JointController control={control} units={units} messages={messages} disabled={!editable} />
       </Section>
       <Section title="Supports along the run" intro="Where the pipe is carried between its ends; the job page checks them against the joints and the engine flange.">
         <SupportsField control={control} units={units} errors={messages} disabled={!editable} />
@@ -177,9 +166,24 @@ export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabe
     <View style={wide ? styles.columns : styles.stack}>
       <Card style={wide ? styles.formColumn : undefined}>{form}</Card>
       <View style={wide ? styles.resultsColumn : undefined}>
-        <RunResults live={live} fields={settled} units={units} />
+        <LiveRunResults control={control} units={units} onEngineFields={setEngineFields} />
       </View>
     </View>
+  );
+}
+
+/** The joint's fields, which alone need the run's peak and tube size: they watch just those. */
+function JointController({ control, units, messages, disabled }: { control: Control<RunFields>; units: UnitSystem; messages: FieldMessages; disabled: boolean }) {
+  const [segments, tubeOdMm] = useWatch({ control, name: ['segments', 'tube.odMm'] });
+  const peakC = Math.max(...segments.flatMap((s) => [s.startTempC, s.endTempC]).filter(Number.isFinite));
+  return (
+    <Controller
+      control={control}
+      name="joint"
+      render={({ field: { value, onChange } }) => (
+        <JointFields value={value} onChange={onChange} peakC={peakC} tubeOdMm={tubeOdMm} units={units} errors={messages} disabled={disabled} />
+      )}
+    />
   );
 }
 
