@@ -129,6 +129,11 @@ export class CatalogueService {
     return { alloyId: id, published: detail.published, draft: detail.draft, diff: diffAlloy(stripMeta(detail.published), stripMeta(detail.draft)!) };
   }
 
+  /** The catalogue's cache stamp: it moves on every publish, edit, retire or restore, on any instance. */
+  stamp(): Promise<number> {
+    return this.store.read().stamps.read('catalogue');
+  }
+
   /** Cached while the catalogue's stamp stands; a publish, edit, retire or restore anywhere bumps it. */
   async publishedAlloy(id: string): Promise<PublishedAlloy> {
     const repo = this.store.read();

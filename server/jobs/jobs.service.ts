@@ -68,15 +68,19 @@ export class JobsService {
     return Promise.all(runs.map((run) => this.answer(session, run)));
   }
 
-  /** One page of jobs; only the runs of the jobs on the page are read and computed (results cached per run revision). */
+  /** One page of jobs; only runs of the page's jobs are read, and only for jobs whose totals are not cached for this revision. */
   async list(query: JobListQuery): Promise<{ items: JobSummary[]; total: number; page: number; pageSize: number }> {
     const repo = this.store.read();
     const [jobs, total] = await repo.listJobs(query);
-    const runs = await repo.runsOfJobs(jobs.map((j) => j.id));
-    const views = await this.computeAll(this.results.session(), runs);
-    const byJob = new Map<string, RunView[]>(jobs.map((j) => [j.id, []]));
+    const session = this.results.session();
+    const basis = await session.basisKey();
+    const keyOf = (job: Job) => `${job.id}@${new Date(job.updatedAt).getTime()}|${basis}`;
+    const missing = jobs.filter((job) => this.results.jobTotals.get(keyOf(job)) === undefined);
+    const views = await this.computeAll(session, await repo.runsOfJobs(missing.map((j) => j.id)));
+    const byJob = new Map<string, RunView[]>(missing.map((j) => [j.id, []]));
     for (const view of views) byJob.get(view.jobId)!.push(view);
-    const items = jobs.map((job) => jobSummary(job, jobTotals(byJob.get(job.id)!)));
+    for (const job of missing) this.results.jobTotals.set(keyOf(job), jobTotals(byJob.get(job.id)!));
+    const items = jobs.map((job) => jobSummary(job, this.results.jobTotals.get(keyOf(job))!));
     return { items, total, page: query.page, pageSize: query.pageSize };
   }
 

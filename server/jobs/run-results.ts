@@ -1,7 +1,8 @@
 import { calculateRun, isEngineInputError } from '../../shared/schemas/calc';
 import type { AlloyData, DesignBasis, FlexPart, RunResult } from '../../shared/engine/types';
 import { runFields, toCalcRequest } from '../../shared/jobs/run-input';
-import type { AlloyUsed, RunFields, RunProblem } from '../../shared/schemas/jobs';
+import type { AlloyUsed, JobTotals, RunFields, RunProblem } from '../../shared/schemas/jobs';
+import { BoundedMap } from '../cache/bounded-map';
 import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
 import type { CurrencyRatesService } from '../currency/currency-rates.service';
 import type { FlexPartsService } from '../flex-parts/flex-parts.service';
@@ -47,6 +48,15 @@ export class ResultSession {
   private designBasis(): Promise<DesignBasis> {
     this.design ??= this.settings.get().then(designBasisOf);
     return this.design;
+  }
+
+  /**
+   * What every result of this request rests on besides the run itself: the catalogue's and flex parts'
+   * stamps and the shop's design basis. A cached result is good while this and the run's revision stand.
+   */
+  async basisKey(): Promise<string> {
+    const [catalogue, flex, design] = await Promise.all([this.catalogue.stamp(), this.parts(), this.designBasis()]);
+    return `${catalogue}|${flex.stamp}|${JSON.stringify(design)}`;
   }
 
   /** The shop's support and clearance rules for the system check. */
@@ -163,15 +173,12 @@ function unavailable(lookup: Exclude<AlloyLookup, { state: 'published' }>, field
 
 /** Results of stored runs by key (run revision, alloy versions, flex parts stamp, design basis); the oldest go first. */
 export class ResultCache {
-  private readonly results = new Map<string, RunResult>();
-
-  constructor(private readonly maxEntries = 3000) {}
+  private readonly results = new BoundedMap<RunResult>(3000);
 
   get(key: string, calculate: () => RunResult): RunResult {
     const found = this.results.get(key);
     if (found) return found;
     const result = calculate();
-    if (this.results.size >= this.maxEntries) this.results.delete(this.results.keys().next().value!);
     this.results.set(key, result);
     return result;
   }
@@ -179,6 +186,8 @@ export class ResultCache {
 
 export class RunResults {
   private readonly cache = new ResultCache();
+  /** Job list totals by job revision and `ResultSession.basisKey()`: a list page reads no runs for jobs already seen. */
+  readonly jobTotals = new BoundedMap<JobTotals>(20_000);
 
   constructor(
     private readonly catalogue: CatalogueService,

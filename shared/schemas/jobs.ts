@@ -261,8 +261,8 @@ export interface JobDetail extends JobView {
   /** Supports, clearances and what is wrong with the job as a system (shared/jobs/system-check.ts). */
   system: SystemCheck;
   /**
-   * 'brief' (the default answer): each result without its growth-per-metre curve and flex candidates
-   * (the chosen part stays); 'full' with `?include=curves`.
+   * 'brief' (the default answer): each result's growth curve at the drawing's resolution, without its
+   * growth-per-metre curve and flex candidates (the chosen part stays); 'full' with `?include=curves`.
    */
   resultDetail: 'brief' | 'full';
 }

@@ -6,11 +6,17 @@ export class DesignationKey1764601610000 implements MigrationInterface {
 
   async up(q: QueryRunner): Promise<void> {
     await q.addColumn('alloy_version', new TableColumn({ name: 'designation_key', type: 'varchar', default: "''" }));
-    await q.createIndex('alloy_version', new TableIndex({ name: 'idx_alloy_version_designation_key', columnNames: ['designation_key'] }));
+    // Holds what the list filters and sorts by, so a search scans the index rather than the wide version rows.
+    await q.createIndex(
+      'alloy_version',
+      new TableIndex({ name: 'idx_alloy_version_list', columnNames: ['designation_key', 'designation', 'uns', 'family', 'max_continuous_c', 'price_per_kg', 'id'] }),
+    );
+    await q.createIndex('alloy', new TableIndex({ name: 'idx_alloy_published_version', columnNames: ['published_version_id'] }));
   }
 
   async down(q: QueryRunner): Promise<void> {
-    await q.dropIndex('alloy_version', 'idx_alloy_version_designation_key');
+    await q.dropIndex('alloy', 'idx_alloy_published_version');
+    await q.dropIndex('alloy_version', 'idx_alloy_version_list');
     await q.dropColumn('alloy_version', 'designation_key');
   }
 }
