@@ -7,7 +7,7 @@
  */
 import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager, ObjectLiteral } from 'typeorm';
-import { designationKey } from '../shared/catalogue/designation-key';
+import { designationKey, searchText } from '../shared/catalogue/designation-key';
 import { Alloy, AlloyVersion, PropertyPoint } from '../server/catalogue/catalogue.entities';
 import { CacheStamps } from '../server/cache/cache-stamps.repository';
 import { openDatabase } from '../server/db/data-source';
@@ -49,7 +49,7 @@ async function addAlloys(ds: DataSource, count: number) {
       const uns = `Z${String(i).padStart(5, '0')}`;
       const designation = `${t.designation} lot ${i}`;
       alloys.push(Object.assign(new Alloy(), { id: alloyId, uns, status: 'published', publishedVersionId: versionId, draftVersionId: null, createdAt: now, updatedAt: now }));
-      versions.push(Object.assign(new AlloyVersion(), { ...t, id: versionId, alloyId, version: 1, uns, designation, designationKey: designationKey(designation), pricePerKg: t.pricePerKg * (0.8 + (i % 40) / 100) }));
+      versions.push(Object.assign(new AlloyVersion(), { ...t, id: versionId, alloyId, version: 1, uns, designation, designationKey: designationKey(designation), searchText: searchText(designation, uns), pricePerKg: t.pricePerKg * (0.8 + (i % 40) / 100) }));
       for (const p of pointsOf.get(t.id) ?? []) rows.push(Object.assign(new PropertyPoint(), { ...p, id: randomUUID(), versionId }));
     }
     await ds.transaction(async (m) => {

@@ -1,4 +1,7 @@
 import { createApp } from '../../server/app';
+import { AlloyVersion } from '../../server/catalogue/catalogue.entities';
+import { CatalogueStore } from '../../server/catalogue/catalogue.repository';
+import { CatalogueService } from '../../server/catalogue/catalogue.service';
 import { Mailer } from '../../server/mail/mailer';
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import type { JobDetail, JobSummary } from '../../shared/schemas/jobs';
@@ -67,6 +70,15 @@ describe('the alloy list, paged in the database', () => {
     expect(await ids('type-321')).toEqual(['Type 321', 'Type 321H']);
     expect(await ids('%')).toEqual([]);
     expect(await ids('_')).toEqual([]);
+  });
+
+  it('when versions from before the list columns are filled in on start, then they sort and search again', async () => {
+    const versions = t.dataSource.getRepository(AlloyVersion);
+    await versions.createQueryBuilder().update().set({ designationKey: '', searchText: '' }).where('uns = :uns', { uns: 'S32100' }).execute();
+    const fab = await signedIn(t.app, 'fabricator');
+    expect((await fab.get('/api/alloys').query({ search: 's32100' })).body.items).toEqual([]);
+    expect(await new CatalogueService(new CatalogueStore(t.dataSource)).fillListKeys()).toBeGreaterThanOrEqual(1);
+    expect((await fab.get('/api/alloys').query({ search: 's32100' })).body.items.map((a: AlloySummary) => a.designation)).toEqual(['Type 321']);
   });
 
   it('when a page lies past the end, then it is empty and the total still counts every match', async () => {

@@ -1,4 +1,5 @@
 import { In, type EntityManager, type SelectQueryBuilder } from 'typeorm';
+import { squashed } from '../../shared/catalogue/designation-key';
 import type { AlloyFamily, AlloyStatus } from '../../shared/schemas/alloy';
 import { Alloy, AlloyVersion, PropertyPoint } from './catalogue.entities';
 
@@ -39,8 +40,6 @@ export interface CtePoint {
 }
 
 const likePattern = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-/** Spaces and hyphens do not count when searching ("type321" finds "Type 321"); portable SQL on SQLite and PostgreSQL. */
-const squashed = (column: string) => `REPLACE(REPLACE(LOWER(${column}), ' ', ''), '-', '')`;
 /** SQLite's default limit on bound values is 32766; PostgreSQL's 65535. */
 const IN_CHUNK = 5000;
 
@@ -58,12 +57,9 @@ export class AlloyListRows {
     const shown = f.withDrafts ? 'v.id = COALESCE(a.published_version_id, a.draft_version_id)' : 'v.id = a.published_version_id';
     const qb = this.m.createQueryBuilder(Alloy, 'a').innerJoin(AlloyVersion, 'v', shown);
     if (!f.withRetired) qb.andWhere('a.status <> :retired', { retired: 'retired' });
-    const needle = f.search?.toLowerCase().replace(/[\s-]/g, '');
-    if (needle) {
-      qb.andWhere(`(${squashed('v.designation')} LIKE LOWER(:needle) ESCAPE '\\' OR ${squashed('v.uns')} LIKE LOWER(:needle) ESCAPE '\\')`, {
-        needle: likePattern(needle),
-      });
-    }
+    // search_text is stored lower-cased and squashed (searchText()), so one LIKE on the list index does it.
+    const needle = f.search ? squashed(f.search) : '';
+    if (needle) qb.andWhere(`v.search_text LIKE :needle ESCAPE '\\'`, { needle: likePattern(needle) });
     if (f.family) qb.andWhere('v.family = :family', { family: f.family });
     if (f.minServiceC !== undefined) qb.andWhere('v.max_continuous_c >= :minServiceC', { minServiceC: f.minServiceC });
     return qb;

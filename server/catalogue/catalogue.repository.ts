@@ -54,12 +54,12 @@ export class CatalogueRepository {
       .getRawOne<{ max: number | null }>();
     return row?.max ?? 0;
   }
-  /** Versions written before the sortable designation existed. */
-  versionsWithoutKey() {
-    return this.m.find(AlloyVersion, { where: { designationKey: '' }, select: { id: true, designation: true } });
+  /** Versions written before the list's sort and search columns existed. */
+  versionsWithoutListKeys() {
+    return this.m.find(AlloyVersion, { where: [{ designationKey: '' }, { searchText: '' }], select: { id: true, designation: true, uns: true } });
   }
-  async setDesignationKey(id: string, key: string) {
-    await this.m.update(AlloyVersion, { id }, { designationKey: key });
+  async setListKeys(id: string, designationKey: string, searchText: string) {
+    await this.m.update(AlloyVersion, { id }, { designationKey, searchText });
   }
   saveVersion(version: AlloyVersion) {
     return this.m.save(AlloyVersion, version);

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { diffAlloy } from '../../shared/catalogue/alloy-diff';
-import { designationKey } from '../../shared/catalogue/designation-key';
+import { designationKey, searchText } from '../../shared/catalogue/designation-key';
 import { toAlloyData } from '../../shared/catalogue/to-alloy-data';
 import type { AlloyData } from '../../shared/engine/types';
 import type { PublicUser } from '../../shared/schemas/auth';
@@ -299,11 +299,11 @@ export class CatalogueService {
     });
   }
 
-  /** Gives versions from before the sortable designation their key; nothing to do once done. */
-  async fillDesignationKeys(): Promise<number> {
+  /** Gives versions from before the list's sort and search columns their values; nothing to do once done. */
+  async fillListKeys(): Promise<number> {
     return this.store.write(async (repo) => {
-      const rows = await repo.versionsWithoutKey();
-      for (const row of rows) await repo.setDesignationKey(row.id, designationKey(row.designation));
+      const rows = await repo.versionsWithoutListKeys();
+      for (const row of rows) await repo.setListKeys(row.id, designationKey(row.designation), searchText(row.designation, row.uns));
       return rows.length;
     });
   }
@@ -326,6 +326,7 @@ function versionFields(input: AlloyInput): Partial<AlloyVersion> {
   return {
     designation: input.designation,
     designationKey: designationKey(input.designation),
+    searchText: searchText(input.designation, input.uns),
     uns: input.uns,
     family: input.family,
     densityKgM3: input.densityKgM3,

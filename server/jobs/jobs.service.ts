@@ -76,7 +76,9 @@ export class JobsService {
     const basis = await session.basisKey();
     const keyOf = (job: Job) => `${job.id}@${new Date(job.updatedAt).getTime()}|${basis}`;
     const missing = jobs.filter((job) => this.results.jobTotals.get(keyOf(job)) === undefined);
-    const views = await this.computeAll(session, await repo.runsOfJobs(missing.map((j) => j.id)));
+    // Computed without keeping each full result: the totals are what the list keeps.
+    const runs = await repo.runsOfJobs(missing.map((j) => j.id));
+    const views = await Promise.all(runs.map(async (run) => runView(run, await session.compute(runFieldsOf(run)))));
     const byJob = new Map<string, RunView[]>(missing.map((j) => [j.id, []]));
     for (const view of views) byJob.get(view.jobId)!.push(view);
     for (const job of missing) this.results.jobTotals.set(keyOf(job), jobTotals(byJob.get(job.id)!));

@@ -173,7 +173,7 @@ function unavailable(lookup: Exclude<AlloyLookup, { state: 'published' }>, field
 
 /** Results of stored runs by key (run revision, alloy versions, flex parts stamp, design basis); the oldest go first. */
 export class ResultCache {
-  private readonly results = new BoundedMap<RunResult>(3000);
+  private readonly results = new BoundedMap<RunResult>(500);
 
   get(key: string, calculate: () => RunResult): RunResult {
     const found = this.results.get(key);

@@ -23,7 +23,7 @@ export interface SeedReport {
 /** Runs every seed step; each adds only what is missing, so this is safe on every start. */
 export async function seed(dataSource: DataSource, options: SeedOptions): Promise<SeedReport> {
   const report: SeedReport = { demoUsers: 0, sources: 0, alloys: 0, flexParts: 0 };
-  await new CatalogueService(new CatalogueStore(dataSource)).fillDesignationKeys();
+  await new CatalogueService(new CatalogueStore(dataSource)).fillListKeys();
   if (options.catalogue ?? true) Object.assign(report, await seedCatalogue(dataSource));
   if (options.demo) {
     report.demoUsers = await seedDemoUsers(dataSource);
