@@ -81,6 +81,21 @@ describe('the alloy list, paged in the database', () => {
     expect((await fab.get('/api/alloys').query({ search: 's32100' })).body.items.map((a: AlloySummary) => a.designation)).toEqual(['Type 321']);
   });
 
+  it('when a draft’s expansion table is edited, then the editors’ list shows the new reach of its data', async () => {
+    const eng = await signedIn(t.app, 'engineer');
+    const src = (await eng.get('/api/sources')).body.items[0].id;
+    const table = (topC: number) => [100, topC].map((tempC) => ({ tempC, meanUmPerMK: 12, sourceId: src }));
+    const created = await eng.post('/api/alloys').send({
+      designation: 'Draft reach alloy', uns: 'N97532', family: 'nickel_chromium', densityKgM3: 8300, densitySourceId: src, maxContinuousC: 600,
+      maxIntermittentC: 650, limitsSourceId: src, pricePerKg: 30, currency: 'EUR', priceSetOn: '2026-11-20', referenceTempC: 20, cte: table(700), modulus: [], yield: [],
+    });
+    expect(created.status).toBe(201);
+    const reach = async () => ((await eng.get('/api/alloys').query({ search: 'N97532', includeDrafts: 'true' })).body.items as AlloySummary[])[0].maxDataC;
+    expect(await reach()).toBe(700);
+    expect((await eng.patch(`/api/alloys/${created.body.alloy.id}`).send({ cte: table(900) })).status).toBe(200);
+    expect(await reach()).toBe(900);
+  });
+
   it('when a page lies past the end, then it is empty and the total still counts every match', async () => {
     const fab = await signedIn(t.app, 'fabricator');
     const res = await fab.get('/api/alloys').query({ page: 99, pageSize: 50 });

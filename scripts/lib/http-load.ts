@@ -67,7 +67,7 @@ export const median = (xs: number[]) => {
 /** Starts a bench server process (see bench-child.ts) and waits for its port. */
 export function startChild(args: string[]): Promise<Target> {
   const child = fork(path.join(__dirname, 'bench-child.ts'), args, {
-    execArgv: ['-r', '@swc-node/register', ...(process.env.PROF ? ['--cpu-prof', '--cpu-prof-dir=/tmp/dilato-prof'] : [])],
+    execArgv: ['-r', '@swc-node/register', '--expose-gc', ...(process.env.PROF ? ['--cpu-prof', '--cpu-prof-dir=/tmp/dilato-prof'] : [])],
     env: { ...process.env, SWC_NODE_PROJECT: 'server/tsconfig.json', NODE_ENV: 'production' },
     stdio: ['ignore', 'ignore', 'inherit', 'ipc'],
   });

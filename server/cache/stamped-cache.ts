@@ -23,4 +23,27 @@ export class StampedCache<V> {
     }
     return value;
   }
+
+  /** Several keys at once; `loadMissing` is called once with the keys not held. */
+  async getMany(stamp: number, keys: string[], loadMissing: (keys: string[]) => Promise<Map<string, V>>): Promise<Map<string, V>> {
+    if (stamp !== this.stamp) {
+      this.values.clear();
+      this.stamp = stamp;
+    }
+    const found = new Map<string, V>();
+    const missing: string[] = [];
+    for (const key of keys) {
+      if (this.values.has(key)) found.set(key, this.values.get(key)!);
+      else missing.push(key);
+    }
+    if (missing.length === 0) return found;
+    const loaded = await loadMissing(missing);
+    for (const [key, value] of loaded) {
+      found.set(key, value);
+      if (this.stamp !== stamp) continue;
+      if (this.values.size >= this.maxEntries) this.values.delete(this.values.keys().next().value!);
+      this.values.set(key, value);
+    }
+    return found;
+  }
 }

@@ -35,17 +35,25 @@ function summaryOf(row: AlloyListRow, cte: CtePoint[], atC: number, editor: bool
  * page's expansion tables are read. Growth at the asked temperature depends on a whole table, so
  * ordering by it reads every matching alloy's table (three columns) and orders here.
  */
-export async function alloyListPage(rows: AlloyListRows, query: AlloyListQuery, filter: AlloyListFilter, editor: boolean): Promise<{ items: AlloySummary[]; total: number }> {
+export async function alloyListPage(
+  rows: AlloyListRows,
+  ctePoints: (versionIds: string[]) => Promise<Map<string, CtePoint[]>>,
+  query: AlloyListQuery,
+  filter: AlloyListFilter,
+  editor: boolean,
+): Promise<{ items: AlloySummary[]; total: number }> {
   const offset = (query.page - 1) * query.pageSize;
   if (query.sort === 'expansion') {
     const all = await rows.rows(filter, 'designation');
-    const cte = await rows.ctePoints(all.map((r) => r.versionId));
+    const cte = await ctePoints(all.map((r) => r.versionId));
     const items = all.map((r) => summaryOf(r, cte.get(r.versionId)!, query.atC, editor));
     // Stable sort: equal growth keeps the designation order the query gave.
     items.sort((a, b) => (a.growthAtMmPerM ?? Infinity) - (b.growthAtMmPerM ?? Infinity));
     return { items: items.slice(offset, offset + query.pageSize), total: items.length };
   }
-  const [page, total] = await Promise.all([rows.rows(filter, query.sort, { offset, limit: query.pageSize }), rows.count(filter)]);
-  const cte = await rows.ctePoints(page.map((r) => r.versionId));
+  const page = await rows.rows(filter, query.sort, { offset, limit: query.pageSize });
+  // A page that is not full is the last one: the total follows without counting.
+  const total = page.length < query.pageSize && (page.length > 0 || offset === 0) ? offset + page.length : await rows.count(filter);
+  const cte = await ctePoints(page.map((r) => r.versionId));
   return { items: page.map((r) => summaryOf(r, cte.get(r.versionId)!, query.atC, editor)), total };
 }

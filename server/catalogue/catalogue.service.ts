@@ -23,6 +23,7 @@ import { Alloy, AlloyRevision, AlloyVersion, PropertyPoint, Source, type Propert
 import type { CatalogueRepository, CatalogueStore } from './catalogue.repository';
 import { StampedCache } from '../cache/stamped-cache';
 import { alloyListPage } from './alloy-list';
+import type { CtePoint } from './alloy-list.repository';
 import { citedSourceIds, datasheetView, revisionView, sourceView, versionView } from './catalogue.views';
 
 export type Actor = (Pick<PublicUser, 'name' | 'role'> & { id: string | null }) | null;
@@ -49,6 +50,8 @@ const TABLE_VALUE: Record<PropertyKind, 'meanUmPerMK' | 'gpa' | 'mpa'> = { cte: 
 
 export class CatalogueService {
   private readonly published = new StampedCache<PublishedAlloy | null>();
+  /** Expansion tables by version id for the list's growth column; an edit of a draft's tables bumps the stamp. */
+  private readonly cteTables = new StampedCache<CtePoint[]>(20_000);
 
   constructor(private readonly store: CatalogueStore) {}
 
@@ -69,7 +72,10 @@ export class CatalogueService {
       family: query.family,
       minServiceC: query.minServiceC,
     };
-    return alloyListPage(this.store.read().list, query, filter, editor);
+    const repo = this.store.read();
+    const stamp = await repo.stamps.read('catalogue');
+    const ctePoints = (ids: string[]) => this.cteTables.getMany(stamp, ids, (missing) => repo.list.ctePoints(missing));
+    return alloyListPage(repo.list, ctePoints, query, filter, editor);
   }
 
   private async visibleAlloy(repo: CatalogueRepository, id: string, actor: Actor): Promise<Alloy> {
