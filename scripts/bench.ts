@@ -6,6 +6,8 @@
 import { calculateRun } from '../shared/engine/calculate-run';
 import type { AlloyData, RunInput } from '../shared/engine/types';
 import { importBench } from './lib/import-bench';
+import path from 'node:path';
+import { interactionBench } from './lib/interaction-bench';
 import { serverBench, type Row } from './lib/server-bench';
 
 const FRAME_MS = 1000 / 60;
@@ -81,7 +83,9 @@ function printTable(rows: Row[]) {
   console.log('');
   console.log('| figure | product | floor | ratio | goal | note |');
   console.log('|---|---|---|---|---|---|');
-  for (const r of rows) console.log(`| ${r.figure} | ${value(r, r.product)} | ${value(r, r.floor)} | ${fmt(r.product / r.floor, 2)}× | ${r.goal} | ${r.note ?? ''} |`);
+  const floor = (r: Row) => (Number.isNaN(r.floor) ? '—' : value(r, r.floor));
+  const ratio = (r: Row) => (Number.isNaN(r.floor) ? '—' : `${fmt(r.product / r.floor, 2)}×`);
+  for (const r of rows) console.log(`| ${r.figure} | ${value(r, r.product)} | ${floor(r)} | ${ratio(r)} | ${r.goal} | ${r.note ?? ''} |`);
 }
 
 async function main() {
@@ -95,7 +99,11 @@ async function main() {
 
   console.log('');
   console.log('Server against its floors (issue 12), each server in its own process, keep-alive client, 8 in flight');
-  printTable(await serverBench((line) => console.log(line)));
+  const rows = await serverBench((line) => console.log(line));
+  // Chromium on the last web build (`npm run build:web`); skipped when there is none.
+  const ui = await interactionBench(path.join(__dirname, '..', 'dist'));
+  if (ui.length === 0) console.log('  (no web build in dist/: interaction rows skipped; run npm run build:web first)');
+  printTable([...rows, ...ui]);
 }
 
 void main().then(() => process.exit(0));

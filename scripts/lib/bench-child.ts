@@ -1,6 +1,6 @@
 /**
  * A server for the bench, in its own process so the load client does not share its thread:
- * `product <database file>` runs the real app on that database; `floor` is bare Express that
+ * `product <database file> [fresh] [web dir]` runs the real app on that database (serving the web build when given); `floor` is bare Express that
  * answers each registered path with fixed bytes (parsing a JSON body first where asked).
  * Talks to the parent over IPC: it sends { port }, and answers { memory } to 'memory'.
  */
@@ -32,11 +32,11 @@ function listen(app: express.Express) {
   server.keepAliveTimeout = 60_000;
 }
 
-async function product(file: string, fresh: boolean) {
+async function product(file: string, fresh: boolean, webDir?: string) {
   const ds = await openDatabase(file);
   if (fresh) await seed(ds, { demo: true, catalogue: true });
   const uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-bench-uploads-'));
-  listen(createApp(ds, { uploadsDir, mailer: new Mailer('smtp://127.0.0.1:9') }));
+  listen(createApp(ds, { uploadsDir, mailer: new Mailer('smtp://127.0.0.1:9'), webDir }));
 }
 
 function floor() {
@@ -65,6 +65,6 @@ process.on('message', (msg: Message) => {
   }
 });
 
-const [mode, file, fresh] = process.argv.slice(2);
-if (mode === 'product') void product(file, fresh === 'fresh');
+const [mode, file, fresh, webDir] = process.argv.slice(2);
+if (mode === 'product') void product(file, fresh === 'fresh', webDir);
 else floor();
