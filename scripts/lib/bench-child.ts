@@ -36,6 +36,7 @@ async function product(file: string, fresh: boolean, webDir?: string) {
   const ds = await openDatabase(file);
   if (fresh) await seed(ds, { demo: true, catalogue: true });
   const uploadsDir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-bench-uploads-'));
+  process.on('exit', () => fs.rmSync(uploadsDir, { recursive: true, force: true }));
   listen(createApp(ds, { uploadsDir, mailer: new Mailer('smtp://127.0.0.1:9'), webDir }));
 }
 
@@ -57,6 +58,7 @@ function floor() {
 }
 
 process.on('SIGINT', () => process.exit(0));
+process.on('SIGTERM', () => process.exit(0));
 process.on('message', (msg: Message) => {
   // After a full collection, so the figure is what the server keeps rather than garbage not yet swept.
   if (msg.type === 'memory') {
