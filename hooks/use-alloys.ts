@@ -1,4 +1,4 @@
-import { keepPreviousData, useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
+import { keepPreviousData, useInfiniteQuery, useMutation, useQueries, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import type { ImportJobView } from '../shared/catalogue/catalogue-csv';
 import type { DiffEntry } from '../shared/catalogue/alloy-diff';
@@ -50,8 +50,14 @@ export const alloyKeys = {
 /** Where the browser downloads the catalogue as CSV (a plain link: the server sends an attachment). */
 export const CATALOGUE_CSV_URL = '/api/alloys/export.csv';
 
-function listQueryString(params: AlloyListParams): string {
-  const query = new URLSearchParams({ pageSize: '200' });
+/** One page of the list as the server answers it. */
+export interface AlloyPage {
+  items: AlloySummary[];
+  total: number;
+}
+
+function listQueryString(params: AlloyListParams, page = 1, pageSize = 200): string {
+  const query = new URLSearchParams({ page: String(page), pageSize: String(pageSize) });
   for (const [key, value] of Object.entries(params)) {
     if (value === undefined || value === '' || (typeof value === 'number' && !Number.isFinite(value))) continue;
     query.set(key, String(value));
@@ -59,13 +65,29 @@ function listQueryString(params: AlloyListParams): string {
   return query.toString();
 }
 
+/** The first 200 matches, for pickers that search as the user types. */
 export function useAlloysQuery(params: AlloyListParams) {
   return useQuery({
     queryKey: alloyKeys.list(params),
-    queryFn: () => api.get<{ items: AlloySummary[]; total: number }>(`/alloys?${listQueryString(params)}`),
+    queryFn: () => api.get<AlloyPage>(`/alloys?${listQueryString(params)}`),
     // Typing in the search or temperature box keeps the last answer on screen until the next arrives.
     placeholderData: keepPreviousData,
   });
+}
+
+const LIST_PAGE_SIZE = 50;
+
+/** The catalogue list page by page: the server searches, filters, sorts and pages; "Load more" asks for the next. */
+export function useAlloyPagesQuery(params: AlloyListParams) {
+  const query = useInfiniteQuery({
+    queryKey: [...alloyKeys.list(params), 'pages'] as const,
+    queryFn: ({ pageParam }) => api.get<AlloyPage>(`/alloys?${listQueryString(params, pageParam, LIST_PAGE_SIZE)}`),
+    initialPageParam: 1,
+    getNextPageParam: (last, pages) => (pages.length * LIST_PAGE_SIZE < last.total ? pages.length + 1 : undefined),
+    placeholderData: keepPreviousData,
+  });
+  const items = query.data?.pages.flatMap((p) => p.items) ?? [];
+  return { ...query, items, total: query.data?.pages[0]?.total ?? 0 };
 }
 
 const fetchAlloy = async (id: string) => (await api.get<{ alloy: AlloyDetail }>(`/alloys/${encodeURIComponent(id)}`)).alloy;

@@ -1,4 +1,4 @@
-import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { keepPreviousData, useInfiniteQuery, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { ActivityView } from '../shared/schemas/activity';
 import type { JobCreateInput, JobDetail, JobPatchInput, JobSummary } from '../shared/schemas/jobs';
 import { api } from './api-client';
@@ -29,16 +29,26 @@ export function useJobActivityQuery(id: string | undefined) {
   });
 }
 
-export function useJobsQuery(params: JobListParams) {
-  return useQuery({
-    queryKey: jobKeys.list(params),
-    queryFn: () => {
-      const query = new URLSearchParams({ status: params.status });
+export interface JobPage {
+  items: JobSummary[];
+  total: number;
+}
+
+/** Jobs page by page, newest change first; "Load more" asks for the next page. */
+export function useJobsQuery(params: JobListParams, pageSize = 25) {
+  const query = useInfiniteQuery({
+    queryKey: [...jobKeys.list(params), pageSize] as const,
+    queryFn: ({ pageParam }) => {
+      const query = new URLSearchParams({ status: params.status, page: String(pageParam), pageSize: String(pageSize) });
       if (params.search?.trim()) query.set('search', params.search.trim());
-      return api.get<{ items: JobSummary[]; total: number }>(`/jobs?${query.toString()}`);
+      return api.get<JobPage>(`/jobs?${query.toString()}`);
     },
+    initialPageParam: 1,
+    getNextPageParam: (last, pages) => (pages.length * pageSize < last.total ? pages.length + 1 : undefined),
     placeholderData: keepPreviousData,
   });
+  const items = query.data?.pages.flatMap((p) => p.items) ?? [];
+  return { ...query, items, total: query.data?.pages[0]?.total ?? 0 };
 }
 
 export function useJobQuery(id: string | undefined) {

@@ -1,10 +1,14 @@
 /**
- * npm run bench: how fast the engine answers the client's live recompute, and how the server
- * keeps answering during a large CSV import. Prints figures only; no assertions.
+ * npm run bench: how fast the engine answers the client's live recompute, how the server
+ * keeps answering during a large CSV import, and the table of issue 12 (each figure against its
+ * floor, measured in this run with interleaved pairs). Prints figures only; no assertions.
  */
 import { calculateRun } from '../shared/engine/calculate-run';
 import type { AlloyData, RunInput } from '../shared/engine/types';
 import { importBench } from './lib/import-bench';
+import path from 'node:path';
+import { interactionBench } from './lib/interaction-bench';
+import { serverBench, type Row } from './lib/server-bench';
 
 const FRAME_MS = 1000 / 60;
 const SECONDS = 1;
@@ -74,11 +78,32 @@ console.log(`  ratio (bare/engine): ${fmt(bare.perSecond / engine.perSecond, 0)}
 console.log(`  mean calculateRun:  ${fmt(meanMs, 4)} ms vs a ${fmt(FRAME_MS, 1)} ms frame (${fmt((meanMs / FRAME_MS) * 100, 2)} % of a frame)`);
 console.log(`  (checksums ${fmt(engine.sink % 1000, 3)} / ${fmt(bare.sink % 1000, 3)})`);
 
-void importBench().then((b) => {
+function printTable(rows: Row[]) {
+  const value = (r: Row, x: number) => (r.unit === 'ms' ? `${fmt(x, 1)} ms` : `${fmt(x)} req/s`);
+  console.log('');
+  console.log('| figure | product | floor | ratio | goal | note |');
+  console.log('|---|---|---|---|---|---|');
+  const floor = (r: Row) => (Number.isNaN(r.floor) ? '—' : value(r, r.floor));
+  const ratio = (r: Row) => (Number.isNaN(r.floor) ? '—' : `${fmt(r.product / r.floor, 2)}×`);
+  for (const r of rows) console.log(`| ${r.figure} | ${value(r, r.product)} | ${floor(r)} | ${ratio(r)} | ${r.goal} | ${r.note ?? ''} |`);
+}
+
+async function main() {
+  const b = await importBench();
   const ms = (x: number) => `${fmt(x, 1)} ms`;
   console.log('');
   console.log(`CSV import bench (${fmt(b.bytes / 1024 / 1024, 2)} MB, ${fmt(b.rows)} rows, ${fmt(b.alloys)} alloys; file database; ${b.phase}, ${fmt(b.created)} created)`);
   console.log(`  import, start to done:      ${ms(b.importMs)} (goal < 5000 ms); ${fmt(b.importMs / b.parseMs, 0)}× a bare parse of the file (${ms(b.parseMs)})`);
   console.log(`  health during the import:   p50 ${ms(b.health.p50)}, p99 ${ms(b.health.p99)} (goal < 100 ms), max ${ms(b.health.max)}, ${b.health.n} answers`);
   console.log(`  health with nothing to do:  p50 ${ms(b.idle.p50)}, p99 ${ms(b.idle.p99)}; p99 ratio busy/idle ${fmt(b.health.p99 / b.idle.p99, 1)}×`);
-});
+
+  console.log('');
+  console.log('Server against its floors (issue 12), each server in its own process, keep-alive client, 8 in flight');
+  const rows = await serverBench((line) => console.log(line));
+  // Chromium on the last web build (`npm run build:web`); skipped when there is none.
+  const ui = await interactionBench(path.join(__dirname, '..', 'dist'));
+  if (ui.length === 0) console.log('  (no web build in dist/: interaction rows skipped; run npm run build:web first)');
+  printTable([...rows, ...ui]);
+}
+
+void main().then(() => process.exit(0));

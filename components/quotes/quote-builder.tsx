@@ -4,6 +4,7 @@ import { useJobsQuery } from '../../hooks/use-jobs';
 import type { QuoteInput, QuoteInputDraft } from '../../shared/schemas/quotes';
 import { EmptyState } from '../ui/empty-state';
 import { ErrorBanner } from '../ui/error-banner';
+import { LoadMore } from '../ui/load-more';
 import { LoadingState } from '../ui/loading-state';
 import { QuoteForm } from './quote-form';
 
@@ -16,11 +17,18 @@ export interface QuoteBuilderProps {
 
 /** Loads the jobs and the published alloys the form picks from, then shows the form. */
 export function QuoteBuilder(props: QuoteBuilderProps) {
-  const jobs = useJobsQuery({ status: 'active' });
+  const jobs = useJobsQuery({ status: 'active' }, 100);
   const alloys = useAlloysQuery({});
   if (jobs.isPending || alloys.isPending) return <LoadingState label="Loading jobs and alloys…" />;
   if (jobs.isError) return <ErrorBanner title="The jobs did not load" message={messageOf(jobs.error)} onRetry={() => void jobs.refetch()} />;
   if (alloys.isError) return <ErrorBanner title="The catalogue did not load" message={messageOf(alloys.error)} onRetry={() => void alloys.refetch()} />;
-  if (jobs.data.items.length === 0) return <EmptyState title="No jobs to quote yet" message="A fabricator creates a job with its runs of tube; then you can quote it." />;
-  return <QuoteForm jobs={jobs.data.items} alloys={alloys.data.items} {...props} />;
+  if (jobs.items.length === 0) return <EmptyState title="No jobs to quote yet" message="A fabricator creates a job with its runs of tube; then you can quote it." />;
+  return (
+    <>
+      <QuoteForm jobs={jobs.items} alloys={alloys.data.items} {...props} />
+      {jobs.hasNextPage ? (
+        <LoadMore noun="jobs" shown={jobs.items.length} total={jobs.total} hasMore loading={jobs.isFetchingNextPage} onLoadMore={() => void jobs.fetchNextPage()} />
+      ) : null}
+    </>
+  );
 }

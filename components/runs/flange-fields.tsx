@@ -1,4 +1,4 @@
-import { type Control, Controller } from 'react-hook-form';
+import { type Control, Controller, useWatch } from 'react-hook-form';
 import { isFlanged } from '../../shared/welds/weld-sites';
 import type { RunFields } from '../../shared/schemas/jobs';
 import type { UnitSystem } from '../../shared/units';
@@ -7,7 +7,6 @@ import type { FieldMessages } from './field-errors';
 
 export interface FlangeFieldsProps {
   control: Control<RunFields>;
-  values: RunFields;
   units: UnitSystem;
   errors: FieldMessages;
   disabled: boolean;
@@ -19,10 +18,12 @@ const ENDS = [
 ] as const;
 
 /** What each flanged end's flange is made of, for the weld plan; shown only where the end carries a flange. */
-export function FlangeFields({ control, values, units, errors, disabled }: FlangeFieldsProps) {
+export function FlangeFields({ control, units, errors, disabled }: FlangeFieldsProps) {
+  const [startFixing, endFixing] = useWatch({ control, name: ['startFixing', 'endFixing'] });
+  const fixings = { startFixing, endFixing };
   return (
     <>
-      {ENDS.filter((end) => isFlanged(values[end.fixing])).map((end) => (
+      {ENDS.filter((end) => isFlanged(fixings[end.fixing])).map((end) => (
         <Controller
           key={end.name}
           control={control}

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useWatch } from 'react-hook-form';
+import { Controller, useWatch, type Control } from 'react-hook-form';
 import { Platform, StyleSheet, useWindowDimensions, View, type ViewStyle } from 'react-native';
 import { layout, spacing } from '../../constants/theme';
 import { isApiError, messageOf } from '../../hooks/api-client';
@@ -21,10 +21,9 @@ import { NearbyField } from './nearby-field';
 import { SupportsField } from './supports-field';
 import { flattenErrors, mergeMessages, type FieldMessages } from './field-errors';
 import { JointFields } from './joint-fields';
-import { RunResults } from './run-results';
+import { LiveRunResults } from './live-run-results';
 import { SegmentsField } from './segments-field';
 import { TubeFields } from './tube-fields';
-import { useDebounced, useLiveResult } from './use-live-result';
 import { useCheckedForm } from '../forms/use-checked-form';
 
 const FIXING_CHOICES = FIXED_POINTS.map((p) => ({ value: p.id, label: p.label }));
@@ -52,12 +51,8 @@ export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabe
     reset,
     formState: { errors, isSubmitting, isDirty },
   } = useCheckedForm<RunFields>({ resolver: zodResolver(runFieldsSchema), defaultValues });
-  const values = useWatch({ control }) as RunFields;
-  const settled = useDebounced(values);
-  const live = useLiveResult(settled);
-  const engineFields = live.state === 'outside' ? live.fields : {};
+  const [engineFields, setEngineFields] = useState<FieldMessages>({});
   const messages = mergeMessages(serverFields, flattenErrors(errors), engineFields);
-  const peakC = Math.max(...values.segments.flatMap((s) => [s.startTempC, s.endTempC]).filter(Number.isFinite));
 
   const submit = handleSubmit(
     async (v) => {
@@ -136,14 +131,8 @@ export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabe
             <ChoicePicker label="End held by" choices={FIXING_CHOICES} value={value} onChange={onChange} error={messages.endFixing} disabled={!editable} />
           )}
         />
-        <FlangeFields control={control} values={values} units={units} errors={messages} disabled={!editable} />
-        <Controller
-          control={control}
-          name="joint"
-          render={({ field: { value, onChange } }) => (
-            <JointFields value={value} onChange={onChange} peakC={peakC} tubeOdMm={values.tube.odMm} units={units} errors={messages} disabled={!editable} />
-          )}
-        />
+        <FlangeFields control={control} units={units} errors={messages} disabled={!editable} />
+        <JointController control={control} units={units} messages={messages} disabled={!editable} />
       </Section>
       <Section title="Supports along the run" intro="Where the pipe is carried between its ends; the job page checks them against the joints and the engine flange.">
         <SupportsField control={control} units={units} errors={messages} disabled={!editable} />
@@ -180,7 +169,7 @@ export function RunEditor({ defaultValues, units, alloyLabel, editable, saveLabe
     <View style={wide ? styles.columns : styles.stack}>
       <Card style={wide ? styles.formColumn : undefined}>{form}</Card>
       <View style={wide ? [styles.resultsColumn, stickyOnWeb] : undefined}>
-        <RunResults live={live} fields={settled} units={units} />
+        <LiveRunResults control={control} units={units} onEngineFields={setEngineFields} />
       </View>
     </View>
   );
@@ -195,6 +184,20 @@ const stickyOnWeb = Platform.select<ViewStyle>({
   web: { position: 'sticky', top: spacing.md, maxHeight: `calc(100vh - ${2 * spacing.md}px)`, overflowY: 'auto' } as unknown as ViewStyle,
   default: {},
 });
+/** The joint's fields, which alone need the run's peak and tube size: they watch just those. */
+function JointController({ control, units, messages, disabled }: { control: Control<RunFields>; units: UnitSystem; messages: FieldMessages; disabled: boolean }) {
+  const [segments, tubeOdMm] = useWatch({ control, name: ['segments', 'tube.odMm'] });
+  const peakC = Math.max(...segments.flatMap((s) => [s.startTempC, s.endTempC]).filter(Number.isFinite));
+  return (
+    <Controller
+      control={control}
+      name="joint"
+      render={({ field: { value, onChange } }) => (
+        <JointFields value={value} onChange={onChange} peakC={peakC} tubeOdMm={tubeOdMm} units={units} errors={messages} disabled={disabled} />
+      )}
+    />
+  );
+}
 
 const styles = StyleSheet.create({
   stack: { gap: spacing.xxl },

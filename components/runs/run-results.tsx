@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '../../constants/theme';
 import { isRestrained } from '../../shared/jobs/fixed-points';
@@ -24,8 +25,8 @@ export interface RunResultsProps {
   units: UnitSystem;
 }
 
-/** Everything the run does hot, recomputed as the inputs change, with the cautions beside it. */
-export function RunResults({ live, fields, units }: RunResultsProps) {
+/** Everything the run does hot, recomputed as the inputs change, with the cautions beside it. Renders again only when its inputs do. */
+export const RunResults = memo(function RunResults({ live, fields, units }: RunResultsProps) {
   return (
     <View style={styles.panel} role="region" aria-label="Results">
       <Text variant="heading" headingLevel={2}>
@@ -51,7 +52,7 @@ export function RunResults({ live, fields, units }: RunResultsProps) {
       <CautionsNote />
     </View>
   );
-}
+});
 
 function ResultBody({ result, fields, units, designation, currency }: { result: RunResult; fields: RunFields; units: UnitSystem; designation: string; currency: string }) {
   const restrained = isRestrained(fields.startFixing, fields.endFixing, fields.joint.type);

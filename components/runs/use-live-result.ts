@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useState } from 'react';
+import { useMemo } from 'react';
 import { useAlloyQuery } from '../../hooks/use-alloys';
 import { useFlexPartsQuery } from '../../hooks/use-flex-parts';
 import { useShopSettingsQuery } from '../../hooks/use-shop-settings';
@@ -12,19 +12,10 @@ import { runFields, toCalcRequest } from '../../shared/jobs/run-input';
 import { runFieldsSchema, type AlloyUsed, type RunFields } from '../../shared/schemas/jobs';
 import type { FieldMessages } from './field-errors';
 
-export const LIVE_DELAY_MS = 250;
-
-/** The value as it was `delayMs` after it last changed, so typing does not recompute on every key. */
-export function useDebounced<T>(value: T, delayMs = LIVE_DELAY_MS): T {
-  const [settled, setSettled] = useState(value);
-  const key = JSON.stringify(value);
-  useEffect(() => {
-    const timer = setTimeout(() => setSettled(value), delayMs);
-    return () => clearTimeout(timer);
-    // The key stands for the value: a new object with the same content is no change.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [key, delayMs]);
-  return settled;
+/** The same value object while its key stays the same, so memoised children skip a render. */
+export function useStableValue<T>(value: T, key: string): T {
+  // eslint-disable-next-line react-hooks/exhaustive-deps
+  return useMemo(() => value, [key]);
 }
 
 export type LiveResult =
@@ -34,11 +25,17 @@ export type LiveResult =
   | { state: 'outside'; message: string; fields: FieldMessages; alloy: AlloyUsed }
   | { state: 'ok'; result: RunResult; alloy: AlloyUsed; currency: string };
 
-/** The run computed in the browser by the shared engine from the published data, as the server will on save. */
+/**
+ * The run computed in the browser by the shared engine from the published data, as the server will on
+ * save: in the render that follows the input event (the engine takes well under a millisecond). The
+ * answer object stays the same while the calculator's inputs do, so typing a name or notes leaves the
+ * results and charts alone.
+ */
 export function useLiveResult(fields: RunFields): LiveResult {
   const key = JSON.stringify(fields);
   // eslint-disable-next-line react-hooks/exhaustive-deps
   const parsed = useMemo(() => runFieldsSchema.safeParse(fields), [key]);
+  const calcKey = parsed.success ? JSON.stringify(toCalcRequest(parsed.data)) : `invalid ${key}`;
   const alloyId = fields.alloyId || undefined;
   const alloy = useAlloyQuery(alloyId);
   const slip = fields.joint.type === 'slip' ? fields.joint : null;
@@ -79,5 +76,5 @@ export function useLiveResult(fields: RunFields): LiveResult {
       return { state: 'outside', message: `The published data of ${used.designation}, version ${used.version}, does not cover this run: ${first}.`, fields: mapped, alloy: used };
     }
     // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [parsed, alloy.isPending, alloy.data, alloy.isError, inner.isPending, inner.data, outer.isPending, outer.data, flex.isPending, flex.data, settings.isPending, settings.data]);
+  }, [calcKey, alloy.isPending, alloy.data, alloy.isError, inner.isPending, inner.data, outer.isPending, outer.data, flex.isPending, flex.data, settings.isPending, settings.data]);
 }

@@ -48,6 +48,10 @@ export class AlloyVersion {
   @Column('integer') version: number;
   @Column('varchar') state: 'draft' | 'published' | 'superseded';
   @Column('varchar') designation: string;
+  /** `designationKey(designation)`: what the list sorts by. */
+  @Column('varchar', { name: 'designation_key', default: '' }) designationKey: string;
+  /** `searchText(designation, uns)`: what the list searches. */
+  @Column('varchar', { name: 'search_text', default: '' }) searchText: string;
   @Column('varchar') uns: string;
   @Column('varchar') family: AlloyFamily;
   @Column('real', { name: 'density_kg_m3' }) densityKgM3: number;

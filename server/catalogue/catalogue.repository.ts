@@ -1,5 +1,7 @@
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import { build, Store } from '../db/store';
+import { AlloyListRows } from './alloy-list.repository';
+import { CacheStamps } from '../cache/cache-stamps.repository';
 import {
   Alloy,
   AlloyRevision,
@@ -12,11 +14,16 @@ import {
 
 /** The only place catalogue rows are read and written. Bind it to a transaction's manager to write atomically. */
 export class CatalogueRepository {
-  constructor(private readonly m: EntityManager) {}
+  /** The alloy list's paged queries. */
+  readonly list: AlloyListRows;
+  /** The catalogue's cache stamp, bumped by every write readers of published data must see. */
+  readonly stamps: CacheStamps;
 
-  allAlloys() {
-    return this.m.find(Alloy);
+  constructor(private readonly m: EntityManager) {
+    this.list = new AlloyListRows(m);
+    this.stamps = new CacheStamps(m);
   }
+
   findAlloy(id: string) {
     return this.m.findOneBy(Alloy, { id });
   }
@@ -52,6 +59,13 @@ export class CatalogueRepository {
       .where('v.alloy_id = :alloyId', { alloyId })
       .getRawOne<{ max: number | null }>();
     return row?.max ?? 0;
+  }
+  /** Versions written before the list's sort and search columns existed. */
+  versionsWithoutListKeys() {
+    return this.m.find(AlloyVersion, { where: [{ designationKey: '' }, { searchText: '' }], select: { id: true, designation: true, uns: true } });
+  }
+  async setListKeys(id: string, designationKey: string, searchText: string) {
+    await this.m.update(AlloyVersion, { id }, { designationKey, searchText });
   }
   saveVersion(version: AlloyVersion) {
     return this.m.save(AlloyVersion, version);

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { diffAlloy, stripMeta } from '../../shared/catalogue/alloy-diff';
+import { designationKey, searchText } from '../../shared/catalogue/designation-key';
 import { toAlloyData } from '../../shared/catalogue/to-alloy-data';
-import { prepareStrainCurve, uniformGrowthMm } from '../../shared/engine/expansion';
 import type { AlloyData } from '../../shared/engine/types';
 import type { PublicUser } from '../../shared/schemas/auth';
 import {
@@ -21,6 +21,9 @@ import { AppError } from '../http/app-error';
 import { fieldsFromZod } from '../http/validate';
 import { Alloy, AlloyRevision, AlloyVersion, PropertyPoint, Source, type PropertyKind } from './catalogue.entities';
 import type { CatalogueRepository, CatalogueStore } from './catalogue.repository';
+import { StampedCache } from '../cache/stamped-cache';
+import { alloyListPage } from './alloy-list';
+import type { CtePoint } from './alloy-list.repository';
 import { citedSourceIds, datasheetView, revisionView, sourceView, versionView } from './catalogue.views';
 
 export type Actor = (Pick<PublicUser, 'name' | 'role'> & { id: string | null }) | null;
@@ -45,15 +48,11 @@ export interface PublishedAlloy {
 
 const TABLE_VALUE: Record<PropertyKind, 'meanUmPerMK' | 'gpa' | 'mpa'> = { cte: 'meanUmPerMK', modulus: 'gpa', yield: 'mpa' };
 
-function growthPerMetreAt(v: AlloyVersionView, atC: number): number | null {
-  try {
-    return uniformGrowthMm(prepareStrainCurve(v), 1000, atC, 20);
-  } catch {
-    return null;
-  }
-}
-
 export class CatalogueService {
+  private readonly published = new StampedCache<PublishedAlloy | null>();
+  /** Expansion tables by version id for the list's growth column; an edit of a draft's tables bumps the stamp. */
+  private readonly cteTables = new StampedCache<CtePoint[]>(20_000);
+
   constructor(private readonly store: CatalogueStore) {}
 
   // ---- reading ----
@@ -64,61 +63,19 @@ export class CatalogueService {
     return new Map(versions.map((v) => [v.id, versionView(v, points)]));
   }
 
-  /** The version a reader sees in lists: the published one, or for editors a never-published draft. */
-  private shownVersionId(alloy: Alloy, actor: Actor, includeDrafts: boolean): string | null {
-    if (alloy.publishedVersionId) return alloy.publishedVersionId;
-    return canEdit(actor) && includeDrafts ? alloy.draftVersionId : null;
-  }
-
   async list(query: AlloyListQuery, actor: Actor): Promise<{ items: AlloySummary[]; total: number }> {
-    const repo = this.store.read();
-    const alloys = (await repo.allAlloys()).filter(
-      (a) => a.status !== 'retired' || (query.includeRetired && canEdit(actor)),
-    );
-    const shown = alloys
-      .map((alloy) => ({ alloy, versionId: this.shownVersionId(alloy, actor, query.includeDrafts) }))
-      .filter((x): x is { alloy: Alloy; versionId: string } => x.versionId !== null);
-    const views = await this.views(repo, shown.map((x) => x.versionId));
-
-    const needle = query.search?.toLowerCase().replace(/[\s-]/g, '');
-    let items: AlloySummary[] = shown.map(({ alloy, versionId }) => {
-      const v = views.get(versionId)!;
-      return {
-        id: alloy.id,
-        designation: v.designation,
-        uns: v.uns,
-        family: v.family,
-        status: alloy.status,
-        version: alloy.publishedVersionId ? views.get(alloy.publishedVersionId)?.version ?? null : null,
-        hasDraft: canEdit(actor) && alloy.draftVersionId !== null,
-        densityKgM3: v.densityKgM3,
-        maxContinuousC: v.maxContinuousC,
-        maxIntermittentC: v.maxIntermittentC,
-        pricePerKg: v.pricePerKg,
-        currency: v.currency,
-        priceIsDemo: v.priceIsDemo,
-        maxDataC: Math.max(...v.cte.map((p) => p.tempC)),
-        growthAtMmPerM: growthPerMetreAt(v, query.atC),
-      };
-    });
-    if (needle) {
-      items = items.filter((i) =>
-        [i.designation, i.uns].some((text) => text.toLowerCase().replace(/[\s-]/g, '').includes(needle)),
-      );
-    }
-    if (query.family) items = items.filter((i) => i.family === query.family);
-    if (query.minServiceC !== undefined) items = items.filter((i) => i.maxContinuousC >= query.minServiceC!);
-
-    const byName = (a: AlloySummary, b: AlloySummary) => a.designation.localeCompare(b.designation, 'en', { numeric: true });
-    const sorters: Record<AlloyListQuery['sort'], (a: AlloySummary, b: AlloySummary) => number> = {
-      designation: byName,
-      limit: (a, b) => b.maxContinuousC - a.maxContinuousC || byName(a, b),
-      expansion: (a, b) => (a.growthAtMmPerM ?? Infinity) - (b.growthAtMmPerM ?? Infinity) || byName(a, b),
-      price: (a, b) => a.pricePerKg - b.pricePerKg || byName(a, b),
+    const editor = canEdit(actor);
+    const filter = {
+      withDrafts: editor && query.includeDrafts,
+      withRetired: editor && query.includeRetired,
+      search: query.search,
+      family: query.family,
+      minServiceC: query.minServiceC,
     };
-    items.sort(sorters[query.sort]);
-    const start = (query.page - 1) * query.pageSize;
-    return { items: items.slice(start, start + query.pageSize), total: items.length };
+    const repo = this.store.read();
+    const stamp = await repo.stamps.read('catalogue');
+    const ctePoints = (ids: string[]) => this.cteTables.getMany(stamp, ids, (missing) => repo.list.ctePoints(missing));
+    return alloyListPage(repo.list, ctePoints, query, filter, editor);
   }
 
   async visibleAlloy(repo: CatalogueRepository, id: string, actor: Actor): Promise<Alloy> {
@@ -184,12 +141,22 @@ export class CatalogueService {
     return (await this.store.read().findAlloyByUns(uns))?.id ?? null;
   }
 
+  /** The catalogue's cache stamp: it moves on every publish, edit, retire or restore, on any instance. */
+  stamp(): Promise<number> {
+    return this.store.read().stamps.read('catalogue');
+  }
+
+  /** Cached while the catalogue's stamp stands; a publish, edit, retire or restore anywhere bumps it. */
   async publishedAlloy(id: string): Promise<PublishedAlloy> {
     const repo = this.store.read();
+    const found = await this.published.get(await repo.stamps.read('catalogue'), id, () => this.readPublished(repo, id));
+    if (!found) throw AppError.notFound('There is no published alloy with this id.');
+    return found;
+  }
+
+  private async readPublished(repo: CatalogueRepository, id: string): Promise<PublishedAlloy | null> {
     const alloy = await repo.findAlloy(id);
-    if (!alloy?.publishedVersionId || alloy.status === 'retired') {
-      throw AppError.notFound('There is no published alloy with this id.');
-    }
+    if (!alloy?.publishedVersionId || alloy.status === 'retired') return null;
     const v = (await this.views(repo, [alloy.publishedVersionId])).get(alloy.publishedVersionId)!;
     const sources = await repo.findSources([...new Set([...v.modulus, ...v.yield].map((p) => p.sourceId))]);
     return {
@@ -301,6 +268,7 @@ export class CatalogueService {
     alloy.draftVersionId = draft.id;
     alloy.uns = input.uns;
     await repo.saveAlloy(alloy);
+    await repo.stamps.bump('catalogue');
     await this.revision(repo, alloy.id, { action: 'edited', version: draft.version, note: note ?? '', diff }, actor);
   }
 
@@ -322,6 +290,7 @@ export class CatalogueService {
       await repo.saveVersion(draft);
       Object.assign(alloy, { publishedVersionId: draft.id, draftVersionId: null, status: 'published', uns: draft.uns, reviewStep: null, reviewNote: '', reviewBy: null, reviewAt: null });
       await repo.saveAlloy(alloy);
+      await repo.stamps.bump('catalogue');
       await this.revision(repo, alloy.id, { action: 'published', version: draft.version, note, diff: diffAlloy(stripMeta(before), stripMeta(draftView)!) }, actor);
       return this.detailIn(repo, alloy.id, actor);
     });
@@ -336,8 +305,18 @@ export class CatalogueService {
       const before = alloy.status;
       alloy.status = next;
       await repo.saveAlloy(alloy);
+      await repo.stamps.bump('catalogue');
       await this.revision(repo, alloy.id, { action: retired ? 'retired' : 'restored', version: null, note, diff: [{ path: 'status', before, after: next }] }, actor);
       return this.detailIn(repo, alloy.id, actor);
+    });
+  }
+
+  /** Gives versions from before the list's sort and search columns their values; nothing to do once done. */
+  async fillListKeys(): Promise<number> {
+    return this.store.write(async (repo) => {
+      const rows = await repo.versionsWithoutListKeys();
+      for (const row of rows) await repo.setListKeys(row.id, designationKey(row.designation), searchText(row.designation, row.uns));
+      return rows.length;
     });
   }
 
@@ -358,6 +337,8 @@ export class CatalogueService {
 function versionFields(input: AlloyInput): Partial<AlloyVersion> {
   return {
     designation: input.designation,
+    designationKey: designationKey(input.designation),
+    searchText: searchText(input.designation, input.uns),
     uns: input.uns,
     family: input.family,
     densityKgM3: input.densityKgM3,

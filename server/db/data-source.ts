@@ -30,6 +30,10 @@ import { RunFlangeAlloys1764601210000 } from './migrations/1764601210000-run-fla
 import { FlexPartCuff1764601220000 } from './migrations/1764601220000-flex-part-cuff';
 import { QuoteLimitOverrides1764601300000 } from './migrations/1764601300000-quote-limit-overrides';
 import { AlloyReview1764601310000 } from './migrations/1764601310000-alloy-review';
+import { CacheStamp } from '../cache/cache-stamp.entity';
+import { ListIndexes1764601600000 } from './migrations/1764601600000-list-indexes';
+import { DesignationKey1764601610000 } from './migrations/1764601610000-designation-key';
+import { CacheStamps1764601620000 } from './migrations/1764601620000-cache-stamps';
 
 export const ENTITIES = [
   User,
@@ -55,6 +59,7 @@ export const ENTITIES = [
   WeldRuleRow,
   WeldRuleRevision,
   QuoteLimitOverride,
+  CacheStamp,
 ];
 export const MIGRATIONS = [
   UsersAndSessions1764600000000,
@@ -74,6 +79,9 @@ export const MIGRATIONS = [
   FlexPartCuff1764601220000,
   QuoteLimitOverrides1764601300000,
   AlloyReview1764601310000,
+  ListIndexes1764601600000,
+  DesignationKey1764601610000,
+  CacheStamps1764601620000,
 ];
 
 /** `database` is a file path, or ':memory:' for tests. */
@@ -99,6 +107,8 @@ export async function openDatabase(database: string): Promise<DataSource> {
   const dataSource = createDataSource(database);
   await dataSource.initialize();
   await dataSource.runMigrations({ transaction: 'each' });
+  // SQLite plans joins from table statistics it gathers only when asked; without them the alloy list scans the wide version rows.
+  if (dataSource.options.type === 'better-sqlite3') await dataSource.query('PRAGMA optimize=0x10002');
   return dataSource;
 }
 

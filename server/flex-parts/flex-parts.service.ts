@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import type { FlexPart } from '../../shared/engine/types';
 import type { FlexPartInput, FlexPartView } from '../../shared/schemas/alloy';
 import { toSizingPart } from '../../shared/catalogue/flex-sizing-part';
+import { StampedCache } from '../cache/stamped-cache';
 import { AppError } from '../http/app-error';
 import type { FlexPartRow } from './flex-part.entity';
 import type { FlexPartsRepository } from './flex-parts.repository';
@@ -31,15 +32,23 @@ function view(row: FlexPartRow): FlexPartView {
 }
 
 export class FlexPartsService {
+  private readonly sizing = new StampedCache<FlexPart[]>(1);
+
   constructor(private readonly repo: FlexPartsRepository) {}
 
   async list(includeInactive: boolean): Promise<FlexPartView[]> {
     return (await this.repo.list(!includeInactive)).map(view);
   }
 
-  /** The active parts, as the calculator's flex sizing reads them. */
+  /** The active parts, as the calculator's flex sizing reads them; cached while the parts' stamp stands. */
   async forSizing(): Promise<FlexPart[]> {
-    return (await this.list(false)).map(toSizingPart);
+    return (await this.forSizingStamped()).parts;
+  }
+
+  /** The active parts with the stamp they stand for, for caches of results that used them. */
+  async forSizingStamped(): Promise<{ stamp: number; parts: FlexPart[] }> {
+    const stamp = await this.repo.stamp();
+    return { stamp, parts: await this.sizing.get(stamp, 'active', async () => (await this.list(false)).map(toSizingPart)) };
   }
 
   async create(input: FlexPartInput, isDemo = false): Promise<FlexPartView> {

@@ -16,15 +16,21 @@ export class JobsRepository {
     this.activity = new ActivityRows(m);
   }
 
-  listJobs(query: JobListQuery) {
+  /** One page of jobs, newest change first, and how many match in all. */
+  listJobs(query: JobListQuery): Promise<[Job[], number]> {
     const qb = this.m.createQueryBuilder(Job, 'j');
     if (query.status !== 'all') qb.andWhere('j.status = :status', { status: query.status });
     if (query.search) {
-      qb.andWhere("(j.name LIKE :like ESCAPE '\\' OR j.customer LIKE :like ESCAPE '\\' OR j.application LIKE :like ESCAPE '\\')", {
-        like: likePattern(query.search),
-      });
+      const like = (column: string) => `LOWER(${column}) LIKE LOWER(:like) ESCAPE '\\'`;
+      qb.andWhere(`(${like('j.name')} OR ${like('j.customer')} OR ${like('j.application')})`, { like: likePattern(query.search) });
     }
-    return qb.orderBy('j.updated_at', 'DESC').addOrderBy('j.name', 'ASC').getMany();
+    return qb
+      .orderBy('j.updated_at', 'DESC')
+      .addOrderBy('j.name', 'ASC')
+      .addOrderBy('j.id', 'ASC')
+      .skip((query.page - 1) * query.pageSize)
+      .take(query.pageSize)
+      .getManyAndCount();
   }
   findJob(id: string) {
     return this.m.findOneBy(Job, { id });

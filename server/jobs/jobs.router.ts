@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import {
   compareQuerySchema,
+  jobDetailQuerySchema,
   jobCreateSchema,
   jobListQuerySchema,
   jobPatchSchema,
@@ -35,7 +36,8 @@ export function jobsRouter(service: JobsService): Router {
   });
 
   router.get('/jobs/:id', requireSignedIn, async (req, res) => {
-    res.json({ job: await service.detail(id(req.params)) });
+    const { include } = parseQuery(jobDetailQuerySchema, req.query);
+    res.json({ job: await service.detail(id(req.params), include === 'curves') });
   });
 
   router.patch('/jobs/:id', editors, async (req, res) => {

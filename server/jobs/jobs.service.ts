@@ -25,7 +25,8 @@ import { AppError } from '../http/app-error';
 import { fieldsFromZod } from '../http/validate';
 import { Job, JobRun } from './job.entities';
 import type { JobsRepository, JobsStore } from './jobs.repository';
-import { jobSummary, jobView, runFieldsOf, runView } from './jobs.views';
+import { briefRun } from './brief-results';
+import { jobSummary, jobView, revisionOf, runFieldsOf, runView } from './jobs.views';
 import type { Computed, ResultSession, RunResults } from './run-results';
 
 /** Gives runs positions 1..n in the order given; returns the runs whose position changed. */
@@ -64,24 +65,38 @@ export class JobsService {
   // ---- reading ----
 
   private async computeAll(session: ResultSession, runs: JobRun[]): Promise<RunView[]> {
-    return Promise.all(runs.map(async (run) => runView(run, await session.compute(runFieldsOf(run)))));
+    return Promise.all(runs.map((run) => this.answer(session, run)));
   }
 
-  async list(query: JobListQuery): Promise<{ items: JobSummary[]; total: number }> {
+  /** One page of jobs; only runs of the page's jobs are read, and only for jobs whose totals are not cached for this revision. */
+  async list(query: JobListQuery): Promise<{ items: JobSummary[]; total: number; page: number; pageSize: number }> {
     const repo = this.store.read();
-    const jobs = await repo.listJobs(query);
-    const runs = await repo.runsOfJobs(jobs.map((j) => j.id));
+    const [jobs, total] = await repo.listJobs(query);
     const session = this.results.session();
-    const views = await this.computeAll(session, runs);
-    const items = jobs.map((job) => jobSummary(job, jobTotals(views.filter((r) => r.jobId === job.id))));
-    return { items, total: items.length };
+    const basis = await session.basisKey();
+    const keyOf = (job: Job) => `${job.id}@${new Date(job.updatedAt).getTime()}|${basis}`;
+    const missing = jobs.filter((job) => this.results.jobTotals.get(keyOf(job)) === undefined);
+    // Computed without keeping each full result: the totals are what the list keeps.
+    const runs = await repo.runsOfJobs(missing.map((j) => j.id));
+    const views = await Promise.all(runs.map(async (run) => runView(run, await session.compute(runFieldsOf(run)))));
+    const byJob = new Map<string, RunView[]>(missing.map((j) => [j.id, []]));
+    for (const view of views) byJob.get(view.jobId)!.push(view);
+    for (const job of missing) this.results.jobTotals.set(keyOf(job), jobTotals(byJob.get(job.id)!));
+    const items = jobs.map((job) => jobSummary(job, this.results.jobTotals.get(keyOf(job))!));
+    return { items, total, page: query.page, pageSize: query.pageSize };
   }
 
-  private async detailIn(repo: JobsRepository, job: Job): Promise<JobDetail> {
+  private async detailIn(repo: JobsRepository, job: Job, full = false): Promise<JobDetail> {
     const [runs, names] = await Promise.all([repo.runsOf(job.id), repo.userNames(job.createdBy ? [job.createdBy] : [])]);
     const session = this.results.session();
     const views = await this.computeAll(session, runs);
-    return { ...jobView(job, names), runs: views, totals: jobTotals(views), system: checkSystem(views, await session.systemBasis()) };
+    return {
+      ...jobView(job, names),
+      runs: full ? views : views.map(briefRun),
+      totals: jobTotals(views),
+      system: checkSystem(views, await session.systemBasis()),
+      resultDetail: full ? 'full' : 'brief',
+    };
   }
 
   private async jobIn(repo: JobsRepository, id: string): Promise<Job> {
@@ -96,14 +111,14 @@ export class JobsService {
     return run;
   }
 
-  async detail(id: string): Promise<JobDetail> {
+  /** The job and its runs; with `full`, each result with its charts' curves and every flex candidate. */
+  async detail(id: string, full = false): Promise<JobDetail> {
     const repo = this.store.read();
-    return this.detailIn(repo, await this.jobIn(repo, id));
+    return this.detailIn(repo, await this.jobIn(repo, id), full);
   }
 
   async run(id: string): Promise<RunView> {
-    const run = await this.runIn(this.store.read(), id);
-    return runView(run, await this.results.session().compute(runFieldsOf(run)));
+    return this.answer(this.results.session(), await this.runIn(this.store.read(), id));
   }
 
   /** The run computed with each candidate alloy and with its own, and each candidate's difference from its own. */
@@ -118,13 +133,14 @@ export class JobsService {
       });
     }
     const fields = runFieldsOf(run);
+    const revision = revisionOf(run);
     // The joint is left out: the figures compared do not depend on it, and a slip member's data must not veto a candidate.
     const opts = { withJoint: false };
-    const current = await session.compute(fields, fields.alloyId, opts);
+    const current = await session.compute(fields, fields.alloyId, opts, revision);
     const base = figuresOf(current);
     const candidates = await Promise.all(
       alloyIds.map(async (alloyId): Promise<CompareRow> => {
-        const c = await session.compute(fields, alloyId, opts);
+        const c = await session.compute(fields, alloyId, opts, revision);
         const figures = figuresOf(c);
         const difference =
           figures && base
@@ -216,7 +232,7 @@ export class JobsService {
   }
 
   private async answer(session: ResultSession, run: JobRun): Promise<RunView> {
-    return runView(run, await session.compute(runFieldsOf(run)));
+    return runView(run, await session.compute(runFieldsOf(run), run.alloyId, { withJoint: true }, revisionOf(run)));
   }
 
   private newRun(jobId: string, fields: RunFields, position: number): JobRun {

@@ -20,6 +20,11 @@ export function runFieldsOf(run: JobRun): RunFields {
   };
 }
 
+/** A stored run's revision: results computed for it stay good until it changes. */
+export function revisionOf(run: JobRun): string {
+  return `${run.id}@${new Date(run.updatedAt).getTime()}`;
+}
+
 export function runView(run: JobRun, computed: Computed): RunView {
   return {
     id: run.id,

@@ -1,7 +1,8 @@
 import { calculateRun, isEngineInputError } from '../../shared/schemas/calc';
 import type { AlloyData, DesignBasis, FlexPart, RunResult } from '../../shared/engine/types';
 import { runFields, toCalcRequest } from '../../shared/jobs/run-input';
-import type { AlloyUsed, RunFields, RunProblem } from '../../shared/schemas/jobs';
+import type { AlloyUsed, JobTotals, RunFields, RunProblem } from '../../shared/schemas/jobs';
+import { BoundedMap } from '../cache/bounded-map';
 import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
 import type { CurrencyRatesService } from '../currency/currency-rates.service';
 import type { FlexPartsService } from '../flex-parts/flex-parts.service';
@@ -32,7 +33,7 @@ const named = (a: AlloyUsed) => `${a.designation} (${a.uns})`;
  */
 export class ResultSession {
   private readonly alloys = new Map<string, Promise<AlloyLookup>>();
-  private flexParts: Promise<FlexPart[]> | null = null;
+  private flexParts: Promise<{ stamp: number; parts: FlexPart[] }> | null = null;
   private design: Promise<DesignBasis> | null = null;
   private rates: ReturnType<CurrencyRatesService['converter']> | null = null;
 
@@ -41,11 +42,21 @@ export class ResultSession {
     private readonly flex: FlexPartsService,
     private readonly settings: ShopSettingsService,
     private readonly currencyRates?: CurrencyRatesService,
+    private readonly cache?: ResultCache,
   ) {}
 
   private designBasis(): Promise<DesignBasis> {
     this.design ??= this.settings.get().then(designBasisOf);
     return this.design;
+  }
+
+  /**
+   * What every result of this request rests on besides the run itself: the catalogue's and flex parts'
+   * stamps and the shop's design basis. A cached result is good while this and the run's revision stand.
+   */
+  async basisKey(): Promise<string> {
+    const [catalogue, flex, design] = await Promise.all([this.catalogue.stamp(), this.parts(), this.designBasis()]);
+    return `${catalogue}|${flex.stamp}|${JSON.stringify(design)}`;
   }
 
   /** The shop's support and clearance rules for the system check. */
@@ -89,19 +100,24 @@ export class ResultSession {
     return { state: 'missing' };
   }
 
-  private parts(): Promise<FlexPart[]> {
-    this.flexParts ??= this.flex.forSizing();
+  private parts(): Promise<{ stamp: number; parts: FlexPart[] }> {
+    this.flexParts ??= this.flex.forSizingStamped();
     return this.flexParts;
   }
 
-  /** The run computed with `alloyId`'s latest published data (the run's own alloy unless a candidate is given). */
-  async compute(run: RunFields, alloyId = run.alloyId, opts: { withJoint: boolean } = { withJoint: true }): Promise<Computed> {
+  /**
+   * The run computed with `alloyId`'s latest published data (the run's own alloy unless a candidate is given).
+   * With a `revision` (the stored run's id and last change), the result is kept for the same run revision,
+   * alloy versions, flex parts and design basis.
+   */
+  async compute(run: RunFields, alloyId = run.alloyId, opts: { withJoint: boolean } = { withJoint: true }, revision?: string): Promise<Computed> {
     const main = await this.alloy(alloyId);
     if (main.state !== 'published') {
       return { alloy: main.state === 'retired' ? main.used : null, result: null, problem: unavailable(main, 'alloyId', 'this run'), currency: null };
     }
     const fields: RunFields = { ...run, alloyId, joint: opts.withJoint ? run.joint : { type: 'none' } };
     const slipAlloys: { inner?: AlloyData; outer?: AlloyData } = {};
+    const slipVersions: string[] = [];
     if (fields.joint.type === 'slip') {
       for (const side of ['inner', 'outer'] as const) {
         const id = fields.joint[side].alloyId;
@@ -111,12 +127,16 @@ export class ResultSession {
           return { alloy: main.used, result: null, problem: unavailable(member, `joint.${side}.alloyId`, `the slip joint's ${side} member`), currency: null };
         }
         slipAlloys[side] = member.published.data;
+        slipVersions.push(`${side}:${member.published.versionId}`);
       }
     }
-    const flexParts = fields.joint.type === 'flex' ? await this.parts() : undefined;
+    const flex = fields.joint.type === 'flex' ? await this.parts() : undefined;
     const design = fields.joint.type === 'none' ? undefined : await this.designBasis();
     try {
-      const priced = await this.inShopCurrency(calculateRun(toCalcRequest(fields), main.published.data, { flexParts, slipAlloys, design }), main.published.currency);
+      const calculate = () => calculateRun(toCalcRequest(fields), main.published.data, { flexParts: flex?.parts, slipAlloys, design });
+      const key = revision && [revision, opts.withJoint, main.published.versionId, slipVersions.join(','), flex?.stamp, design && JSON.stringify(design)].join('|');
+      const result = key && this.cache ? this.cache.get(key, calculate) : calculate();
+      const priced = await this.inShopCurrency(result, main.published.currency);
       return { alloy: main.used, result: priced.result, problem: null, currency: priced.currency };
     } catch (err) {
       if (!isEngineInputError(err)) throw err;
@@ -151,7 +171,24 @@ function unavailable(lookup: Exclude<AlloyLookup, { state: 'published' }>, field
   };
 }
 
+/** Results of stored runs by key (run revision, alloy versions, flex parts stamp, design basis); the oldest go first. */
+export class ResultCache {
+  private readonly results = new BoundedMap<RunResult>(500);
+
+  get(key: string, calculate: () => RunResult): RunResult {
+    const found = this.results.get(key);
+    if (found) return found;
+    const result = calculate();
+    this.results.set(key, result);
+    return result;
+  }
+}
+
 export class RunResults {
+  private readonly cache = new ResultCache();
+  /** Job list totals by job revision and `ResultSession.basisKey()`: a list page reads no runs for jobs already seen. */
+  readonly jobTotals = new BoundedMap<JobTotals>(20_000);
+
   constructor(
     private readonly catalogue: CatalogueService,
     private readonly flexParts: FlexPartsService,
@@ -160,6 +197,6 @@ export class RunResults {
   ) {}
 
   session(): ResultSession {
-    return new ResultSession(this.catalogue, this.flexParts, this.settings, this.currencyRates);
+    return new ResultSession(this.catalogue, this.flexParts, this.settings, this.currencyRates, this.cache);
   }
 }

@@ -1,4 +1,6 @@
 import type { DataSource } from 'typeorm';
+import { CatalogueStore } from '../catalogue/catalogue.repository';
+import { CatalogueService } from '../catalogue/catalogue.service';
 import { seedCatalogue, seedFlexParts } from './catalogue-seed';
 import { seedDemoJobs } from './demo-jobs';
 import { seedDemoUsers } from './demo-users';
@@ -23,6 +25,7 @@ export interface SeedReport {
 /** Runs every seed step; each adds only what is missing, so this is safe on every start. */
 export async function seed(dataSource: DataSource, options: SeedOptions): Promise<SeedReport> {
   const report: SeedReport = { demoUsers: 0, sources: 0, alloys: 0, flexParts: 0, weldRules: 0 };
+  await new CatalogueService(new CatalogueStore(dataSource)).fillListKeys();
   if (options.catalogue ?? true) {
     Object.assign(report, await seedCatalogue(dataSource));
     report.weldRules = await seedWeldRules(dataSource);

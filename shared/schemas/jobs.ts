@@ -40,10 +40,17 @@ export const jobPatchSchema = z
   .refine((v) => Object.keys(v).length > 0, { error: 'Change at least one thing' });
 export type JobPatchInput = z.infer<typeof jobPatchSchema>;
 
-/** Query of GET /api/jobs. The default list hides archived jobs. */
+/** Query of GET /api/jobs. The default list hides archived jobs; newest change first, one page at a time. */
 export const jobListQuerySchema = z.object({
   search: z.string().trim().max(100).optional(),
   status: z.enum(['active', 'archived', 'all'], { error: 'Use active, archived or all' }).default('active'),
+  page: z.coerce.number({ error: 'Enter a whole number' }).int({ error: 'Enter a whole number' }).min(1, { error: 'Pages start at 1' }).default(1),
+  pageSize: z.coerce.number({ error: 'Enter a whole number' }).int({ error: 'Enter a whole number' }).min(1, { error: 'At least 1' }).max(100, { error: 'At most 100' }).default(25),
+});
+
+/** Query of GET /api/jobs/:id: results carry the chart curves and every flex candidate only when asked. */
+export const jobDetailQuerySchema = z.object({
+  include: z.enum(['curves'], { error: 'Use include=curves' }).optional(),
 });
 export type JobListQuery = z.infer<typeof jobListQuerySchema>;
 
@@ -260,6 +267,11 @@ export interface JobDetail extends JobView {
   totals: JobTotals;
   /** Supports, clearances and what is wrong with the job as a system (shared/jobs/system-check.ts). */
   system: SystemCheck;
+  /**
+   * 'brief' (the default answer): each result's growth curve at the drawing's resolution, without its
+   * growth-per-metre curve and flex candidates (the chosen part stays); 'full' with `?include=curves`.
+   */
+  resultDetail: 'brief' | 'full';
 }
 
 export interface JobSummary {

@@ -12,12 +12,13 @@ import { growthBasisWords } from '../../../shared/units';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorBanner } from '../../../components/ui/error-banner';
+import { LoadMore } from '../../../components/ui/load-more';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { Screen } from '../../../components/ui/screen';
 import { Text } from '../../../components/ui/text';
 import { layout, spacing } from '../../../constants/theme';
 import { messageOf } from '../../../hooks/api-client';
-import { CATALOGUE_CSV_URL, useAlloysQuery, useCsvImport } from '../../../hooks/use-alloys';
+import { CATALOGUE_CSV_URL, useAlloyPagesQuery, useCsvImport } from '../../../hooks/use-alloys';
 import { useSessionQuery } from '../../../hooks/use-session';
 import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
@@ -29,7 +30,7 @@ export default function AlloyListScreen() {
   const [filters, setFilters] = useState(DEFAULT_FILTERS);
   const [selected, setSelected] = useState<string[]>([]);
   const { params, atC, atError, minServiceError } = toListParams(filters, units);
-  const alloys = useAlloysQuery(params);
+  const alloys = useAlloyPagesQuery(params);
   const csvImport = useCsvImport();
   const wide = useWindowDimensions().width >= layout.wideBreakpoint;
 
@@ -66,7 +67,7 @@ export default function AlloyListScreen() {
         <LoadingState label="Loading alloys…" />
       ) : alloys.isError ? (
         <ErrorBanner title="The catalogue did not load" message={messageOf(alloys.error)} onRetry={() => void alloys.refetch()} />
-      ) : alloys.data.items.length === 0 ? (
+      ) : alloys.items.length === 0 ? (
         <EmptyState
           title="No alloys match"
           message="Clear the search or lower the minimum service temperature to see more."
@@ -75,11 +76,11 @@ export default function AlloyListScreen() {
       ) : (
         <View style={styles.section}>
           <Text tone="muted" aria-live="polite">
-            {alloys.data.total} {alloys.data.total === 1 ? 'alloy' : 'alloys'}
+            {alloys.total} {alloys.total === 1 ? 'alloy' : 'alloys'}
           </Text>
           {wide ? (
             <AlloyTable
-              alloys={alloys.data.items}
+              alloys={alloys.items}
               atC={atC}
               units={units}
               selectedIds={selected}
@@ -88,7 +89,7 @@ export default function AlloyListScreen() {
             />
           ) : (
             <View role="list" aria-label="Alloys" style={styles.cards}>
-              {alloys.data.items.map((alloy) => (
+              {alloys.items.map((alloy) => (
                 <View key={alloy.id} role="listitem">
                   <AlloyCard
                     alloy={alloy}
@@ -102,6 +103,14 @@ export default function AlloyListScreen() {
               ))}
             </View>
           )}
+          <LoadMore
+            noun="alloys"
+            shown={alloys.items.length}
+            total={alloys.total}
+            hasMore={alloys.hasNextPage}
+            loading={alloys.isFetchingNextPage}
+            onLoadMore={() => void alloys.fetchNextPage()}
+          />
         </View>
       )}
 

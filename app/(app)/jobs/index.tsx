@@ -8,6 +8,7 @@ import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorBanner } from '../../../components/ui/error-banner';
+import { LoadMore } from '../../../components/ui/load-more';
 import { LoadingState } from '../../../components/ui/loading-state';
 import { Screen } from '../../../components/ui/screen';
 import { SegmentedControl } from '../../../components/ui/segmented-control';
@@ -77,7 +78,7 @@ export default function JobsScreen() {
         <LoadingState label="Loading jobs…" />
       ) : jobs.isError ? (
         <ErrorBanner title="The jobs did not load" message={messageOf(jobs.error)} onRetry={() => void jobs.refetch()} />
-      ) : jobs.data.items.length === 0 ? (
+      ) : jobs.items.length === 0 ? (
         <EmptyState
           title={filtered ? 'No jobs match' : 'No jobs yet'}
           message={
@@ -104,15 +105,23 @@ export default function JobsScreen() {
       ) : (
         <View style={styles.list}>
           <Text tone="muted" aria-live="polite">
-            {jobs.data.total} {jobs.data.total === 1 ? 'job' : 'jobs'}
+            {jobs.total} {jobs.total === 1 ? 'job' : 'jobs'}
           </Text>
           <View role="list" aria-label="Jobs" style={styles.list}>
-            {jobs.data.items.map((job) => (
+            {jobs.items.map((job) => (
               <View key={job.id} role="listitem">
                 <JobCard job={job} units={units} />
               </View>
             ))}
           </View>
+          <LoadMore
+            noun="jobs"
+            shown={jobs.items.length}
+            total={jobs.total}
+            hasMore={jobs.hasNextPage}
+            loading={jobs.isFetchingNextPage}
+            onLoadMore={() => void jobs.fetchNextPage()}
+          />
         </View>
       )}
     </Screen>
