@@ -212,7 +212,7 @@ describe('published data cached in each instance', () => {
     });
     expect(created.status).toBe(201);
     const id = created.body.alloy.id as string;
-    expect((await admin.post(`/api/alloys/${id}/publish`).send({})).status).toBe(200);
+    expect((await admin.post(`/api/alloys/${id}/publish`).send({ note: 'Checked against the data sheet' })).status).toBe(200);
 
     const eng = await otherSignedIn('engineer');
     // A constant mean coefficient α from 20 °C: growth = α·L·ΔT = 10e-6 × 1000 mm × 500 K = 5.000 mm (ASTM E228's definition of the mean coefficient).
@@ -225,7 +225,7 @@ describe('published data cached in each instance', () => {
     expect((await admin.patch(`/api/alloys/${id}`).send({ cte: cte(12), note: 'new data' })).status).toBe(200);
     expect((await eng.post('/api/calc/run').send(calcBody(id))).body.growthMm).toBeCloseTo(5.0, 6);
 
-    expect((await admin.post(`/api/alloys/${id}/publish`).send({})).status).toBe(200);
+    expect((await admin.post(`/api/alloys/${id}/publish`).send({ note: 'Price from the new supplier list' })).status).toBe(200);
     const after = await eng.post('/api/calc/run').send(calcBody(id));
     // 12e-6 × 1000 mm × 500 K = 6.000 mm.
     expect(after.body.growthMm).toBeCloseTo(6.0, 6);
