@@ -5,7 +5,9 @@ import request from 'supertest';
 import { ConfigError, loadConfig } from '../../server/config';
 import { openDatabase, rawDatabase } from '../../server/db/data-source';
 import { seed } from '../../server/seed/seed';
+import { User } from '../../server/users/user.entity';
 import { createTestApp, HOST } from './test-app';
+import { onSqliteOnly, openTestDatabase } from './test-database';
 
 describe('configuration', () => {
   it('when nothing is set, then the embedded defaults apply', () => {
@@ -42,7 +44,7 @@ describe('configuration', () => {
   });
 });
 
-describe('database', () => {
+onSqliteOnly()('database file (SQLite)', () => {
   let dir: string;
   beforeEach(() => {
     dir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-db-'));
@@ -57,23 +59,26 @@ describe('database', () => {
     expect(db.pragma('foreign_keys', { simple: true })).toBe(1);
     await ds.destroy();
   });
+});
 
+describe('database', () => {
   it('when the demo seed runs twice, then the four demo users exist once each', async () => {
-    const file = path.join(dir, 'dilato.sqlite');
-    const first = await openDatabase(file);
-    expect((await seed(first, { demo: true })).demoUsers).toBe(4);
-    await first.destroy();
-    const second = await openDatabase(file);
+    const db = await openTestDatabase({ reopenable: true });
+    expect((await seed(db.dataSource, { demo: true })).demoUsers).toBe(4);
+    await db.dataSource.destroy();
+    // Opened again from its file or URL: a second start on the same data.
+    const second = await openDatabase(db.url);
     expect((await seed(second, { demo: true })).demoUsers).toBe(0);
-    expect(rawDatabase(second).prepare('SELECT count(*) AS n FROM app_user').get()).toEqual({ n: 4 });
+    expect(await second.getRepository(User).count()).toBe(4);
     await second.destroy();
+    await db.close();
   });
 
   it('when demo seeding is off, then no demo accounts exist', async () => {
-    const ds = await openDatabase(':memory:');
-    await seed(ds, { demo: false });
-    expect(rawDatabase(ds).prepare('SELECT count(*) AS n FROM app_user').get()).toEqual({ n: 0 });
-    await ds.destroy();
+    const db = await openTestDatabase();
+    await seed(db.dataSource, { demo: false });
+    expect(await db.dataSource.getRepository(User).count()).toBe(0);
+    await db.close();
   });
 });
 

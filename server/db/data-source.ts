@@ -1,5 +1,6 @@
 import 'reflect-metadata';
 import { DataSource } from 'typeorm';
+import { databaseKind } from './column-types';
 import { Alloy, AlloyRevision, AlloyVersion, Datasheet, PropertyPoint, Source } from '../catalogue/catalogue.entities';
 import { FlexPartRow } from '../flex-parts/flex-part.entity';
 import { User } from '../users/user.entity';
@@ -24,6 +25,7 @@ import { CurrencyRates1764600510000 } from './migrations/1764600510000-currency-
 import { CurrencyRate } from '../currency/currency-rate.entity';
 import { Deposit, PaymentEventSeen } from '../payments/deposit.entities';
 import { QuoteDeposits1764600900000 } from './migrations/1764600900000-quote-deposits';
+import { InsertionOrder1764601500000 } from './migrations/1764601500000-insertion-order';
 
 export const ENTITIES = [
   User,
@@ -60,10 +62,29 @@ export const MIGRATIONS = [
   Activity1764600610000,
   RunSupportsAndNearby1764600700000,
   QuoteDeposits1764600900000,
+  InsertionOrder1764601500000,
 ];
 
-/** `database` is a file path, or ':memory:' for tests. */
+/**
+ * `database` is a SQLite file path (':memory:' for tests) or a `postgres://` URL. Entities pick their
+ * column types from DATABASE_URL when they load, so the URL opened must be of the same kind.
+ */
 export function createDataSource(database: string): DataSource {
+  const kind = databaseKind(database.startsWith('postgres') ? database : undefined);
+  if (kind !== databaseKind()) {
+    throw new Error(`cannot open a ${kind} database in a process whose DATABASE_URL names ${databaseKind()}: column types are chosen at start`);
+  }
+  if (kind === 'postgres') {
+    return new DataSource({
+      type: 'postgres',
+      url: database,
+      entities: ENTITIES,
+      migrations: MIGRATIONS,
+      synchronize: false,
+      migrationsRun: false,
+      poolSize: 10,
+    });
+  }
   return new DataSource({
     type: 'better-sqlite3',
     database,
@@ -88,7 +109,14 @@ export async function openDatabase(database: string): Promise<DataSource> {
   return dataSource;
 }
 
-/** The raw better-sqlite3 handle under TypeORM, shared with lucia's session adapter. */
+export const isPostgres = (dataSource: DataSource) => dataSource.options.type === 'postgres';
+
+/** The raw better-sqlite3 handle under TypeORM, shared with lucia's SQLite session adapter. */
 export function rawDatabase(dataSource: DataSource): import('better-sqlite3').Database {
   return (dataSource.driver as unknown as { databaseConnection: import('better-sqlite3').Database }).databaseConnection;
+}
+
+/** TypeORM's pg pool, shared with lucia's PostgreSQL session adapter. */
+export function rawPool(dataSource: DataSource): import('pg').Pool {
+  return (dataSource.driver as unknown as { master: import('pg').Pool }).master;
 }

@@ -20,9 +20,9 @@ export class JobsRepository {
     const qb = this.m.createQueryBuilder(Job, 'j');
     if (query.status !== 'all') qb.andWhere('j.status = :status', { status: query.status });
     if (query.search) {
-      qb.andWhere("(j.name LIKE :like ESCAPE '\\' OR j.customer LIKE :like ESCAPE '\\' OR j.application LIKE :like ESCAPE '\\')", {
-        like: likePattern(query.search),
-      });
+      // LOWER on both sides: SQLite's LIKE ignores ASCII case, PostgreSQL's does not.
+      const like = (column: string) => `LOWER(j.${column}) LIKE LOWER(:like) ESCAPE '\\'`;
+      qb.andWhere(`(${like('name')} OR ${like('customer')} OR ${like('application')})`, { like: likePattern(query.search) });
     }
     return qb.orderBy('j.updated_at', 'DESC').addOrderBy('j.name', 'ASC').getMany();
   }
