@@ -15,7 +15,7 @@ async function main() {
     const migrate = spawnSync(process.execPath, ['-r', '@swc-node/register', path.join(root, 'scripts', 'lib', 'migrate-only.ts')], { cwd: root, env, stdio: 'inherit' });
     if (migrate.status !== 0) throw new Error('migrations failed on PostgreSQL');
     const started = Date.now();
-    const jest = spawnSync(process.execPath, [require.resolve('jest/bin/jest'), '--selectProjects', 'node', '__tests__/server/', ...process.argv.slice(2)], {
+    const jest = spawnSync(process.execPath, [require.resolve('jest/bin/jest'), ...(process.argv.length > 2 ? process.argv.slice(2) : ['__tests__/server/']), '--selectProjects', 'node'], {
       cwd: root,
       env,
       stdio: 'inherit',

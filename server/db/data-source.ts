@@ -26,6 +26,9 @@ import { CurrencyRate } from '../currency/currency-rate.entity';
 import { Deposit, PaymentEventSeen } from '../payments/deposit.entities';
 import { QuoteDeposits1764600900000 } from './migrations/1764600900000-quote-deposits';
 import { InsertionOrder1764601500000 } from './migrations/1764601500000-insertion-order';
+import { RateLimits1764601510000 } from './migrations/1764601510000-rate-limits';
+import { ImportJobs1764601520000 } from './migrations/1764601520000-import-jobs';
+import { ImportJobRow } from '../catalogue/csv-import/import-job.entity';
 
 export const ENTITIES = [
   User,
@@ -48,6 +51,7 @@ export const ENTITIES = [
   ActivityEntry,
   Deposit,
   PaymentEventSeen,
+  ImportJobRow,
 ];
 export const MIGRATIONS = [
   UsersAndSessions1764600000000,
@@ -63,6 +67,8 @@ export const MIGRATIONS = [
   RunSupportsAndNearby1764600700000,
   QuoteDeposits1764600900000,
   InsertionOrder1764601500000,
+  RateLimits1764601510000,
+  ImportJobs1764601520000,
 ];
 
 /**
