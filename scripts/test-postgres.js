@@ -15,7 +15,7 @@ async function main() {
     const migrate = spawnSync(process.execPath, ['-r', '@swc-node/register', path.join(root, 'scripts', 'lib', 'migrate-only.ts')], { cwd: root, env, stdio: 'inherit' });
     if (migrate.status !== 0) throw new Error('migrations failed on PostgreSQL');
     const started = Date.now();
-    const jest = spawnSync(process.execPath, [require.resolve('jest/bin/jest'), ...(process.argv.length > 2 ? process.argv.slice(2) : ['__tests__/server/']), '--selectProjects', 'node'], {
+    const jest = spawnSync(process.execPath, [require.resolve('jest/bin/jest'), ...(process.argv.length > 2 ? process.argv.slice(2) : ['__tests__/server/']), '--selectProjects', 'node', '--testTimeout', '30000'], {
       cwd: root,
       env,
       stdio: 'inherit',

@@ -5,7 +5,6 @@ import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { createApp, type AppOptions } from '../../server/app';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/seed/demo-users';
-import { seed } from '../../server/seed/seed';
 import { startFakeSmtp } from '../../server/mail/fake-smtp';
 import { Mailer } from '../../server/mail/mailer';
 import { OutboxRepository } from '../../server/mail/outbox.repository';
@@ -34,9 +33,8 @@ type TestOptions = Partial<AppOptions> & { demo?: boolean; catalogue?: boolean }
  * (reference catalogue and demo shop), with its own uploads folder.
  */
 export async function createTestApp(options: TestOptions = {}): Promise<TestApp> {
-  const database = await openTestDatabase();
+  const database = await openTestDatabase({ seed: { demo: options.demo ?? true, catalogue: options.catalogue ?? true } });
   const dataSource = database.dataSource;
-  await seed(dataSource, { demo: options.demo ?? true, catalogue: options.catalogue ?? true });
   const uploadsDir = options.uploadsDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-uploads-'));
   const smtp = await startFakeSmtp(new OutboxRepository(dataSource));
   const mailer = new Mailer(smtp.url);

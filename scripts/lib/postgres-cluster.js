@@ -69,7 +69,11 @@ async function throwawayDatabase(serverUrl = process.env.TEST_POSTGRES_URL) {
     adminUrl: admin,
     drop: async () => {
       try {
-        await withAdmin(admin, (c) => c.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`));
+        // The run's database and every copy the tests made of it (named after it).
+        await withAdmin(admin, async (c) => {
+          const { rows } = await c.query("SELECT datname FROM pg_database WHERE datname = $1 OR datname LIKE $1 || '\\_%'", [name]);
+          for (const { datname } of rows) await c.query(`DROP DATABASE IF EXISTS "${datname}" WITH (FORCE)`);
+        });
       } finally {
         cluster?.stop();
       }

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import type { ImportJobView, ImportPhase, ImportReport } from '../../../shared/catalogue/catalogue-csv';
+import type { ImportJobView, ImportReport } from '../../../shared/catalogue/catalogue-csv';
 import { AppError } from '../../http/app-error';
 import { isUniqueViolation } from '../../db/errors';
 import { build } from '../../db/store';
