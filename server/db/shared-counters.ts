@@ -17,3 +17,8 @@ export function databaseCounters(dataSource: DataSource): Counters {
       : new RateLimiterSQLite({ ...common, storeClient: rawDatabase(dataSource), storeType: 'better-sqlite3' });
   };
 }
+
+/** Drops counters whose window has passed (the stores' own hourly sweep is off: its timer outlives a closed database in tests). */
+export async function clearExpiredCounters(dataSource: DataSource): Promise<void> {
+  await dataSource.createQueryBuilder().delete().from('rate_limit').where('expire < :now', { now: Date.now() }).execute();
+}
