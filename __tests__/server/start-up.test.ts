@@ -3,11 +3,11 @@ import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import { ConfigError, loadConfig } from '../../server/config';
-import { openDatabase, rawDatabase } from '../../server/db/data-source';
+import { createDataSource, openDatabase, rawDatabase } from '../../server/db/data-source';
 import { seed } from '../../server/seed/seed';
 import { User } from '../../server/users/user.entity';
 import { createTestApp, HOST } from './test-app';
-import { onSqliteOnly, openTestDatabase } from './test-database';
+import { onSqliteOnly, openTestDatabase, testingOnPostgres } from './test-database';
 
 describe('configuration', () => {
   it('when nothing is set, then the embedded defaults apply', () => {
@@ -100,5 +100,18 @@ describe('serving the web app', () => {
     expect(api.body.error.code).toBe('not_found');
     await t.close();
     fs.rmSync(webDir, { recursive: true, force: true });
+  });
+});
+
+describe('choosing the database', () => {
+  it('when DATABASE_URL names PostgreSQL, then the configuration says so; a non-postgres URL stops start-up naming it', () => {
+    expect(loadConfig({ DATABASE_URL: 'postgres://dilato@db.internal:5432/dilato' })).toMatchObject({ onPostgres: true, databasePath: 'postgres://dilato@db.internal:5432/dilato' });
+    expect(loadConfig({}).onPostgres).toBe(false);
+    expect(() => loadConfig({ DATABASE_URL: 'mysql://db/dilato' })).toThrow(/DATABASE_URL: must be a postgres:\/\/ URL/);
+  });
+
+  it('when this process chose its column types for one kind of database, then opening the other kind is refused', () => {
+    const other = testingOnPostgres() ? path.join(os.tmpdir(), 'never-made.sqlite') : 'postgres://nobody@127.0.0.1:1/none';
+    expect(() => createDataSource(other)).toThrow(/column types are chosen at start/);
   });
 });

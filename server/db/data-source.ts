@@ -76,7 +76,7 @@ export const MIGRATIONS = [
  * column types from DATABASE_URL when they load, so the URL opened must be of the same kind.
  */
 export function createDataSource(database: string): DataSource {
-  const kind = databaseKind(database.startsWith('postgres') ? database : undefined);
+  const kind = databaseKind(database);
   if (kind !== databaseKind()) {
     throw new Error(`cannot open a ${kind} database in a process whose DATABASE_URL names ${databaseKind()}: column types are chosen at start`);
   }
