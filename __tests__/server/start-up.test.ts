@@ -3,7 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import { ConfigError, loadConfig } from '../../server/config';
-import { createDataSource, openDatabase, rawDatabase } from '../../server/db/data-source';
+import { createDataSource, MIGRATIONS, openDatabase, rawDatabase } from '../../server/db/data-source';
 import { seed } from '../../server/seed/seed';
 import { User } from '../../server/users/user.entity';
 import { createTestApp, HOST } from './test-app';
@@ -113,5 +113,26 @@ describe('choosing the database', () => {
   it('when this process chose its column types for one kind of database, then opening the other kind is refused', () => {
     const other = testingOnPostgres() ? path.join(os.tmpdir(), 'never-made.sqlite') : 'postgres://nobody@127.0.0.1:1/none';
     expect(() => createDataSource(other)).toThrow(/column types are chosen at start/);
+  });
+});
+
+describe('migration names', () => {
+  it('when the migrations were rewritten for both databases, then the first twelve keep the names already recorded in existing databases', () => {
+    // The `migrations` table of a database made before PostgreSQL support lists exactly these; a renamed one would run again.
+    expect(MIGRATIONS.slice(0, 12).map((m) => new m().name)).toEqual([
+      'UsersAndSessions1764600000000',
+      'Catalogue1764600100000',
+      'Jobs1764600200000',
+      'UserPreferences1764600210000',
+      'QuotesAndMail1764600300000',
+      'FlexPartRatings1764600400000',
+      'AlloyDataCautions1764600500000',
+      'CurrencyRates1764600510000',
+      'SignInAddresses1764600600000',
+      'Activity1764600610000',
+      'RunSupportsAndNearby1764600700000',
+      'QuoteDeposits1764600900000',
+    ]);
+    expect(MIGRATIONS.every((m) => new m().name === m.name)).toBe(true);
   });
 });
