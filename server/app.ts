@@ -11,6 +11,7 @@ import { KnownAddressesRepository } from './auth/known-addresses.repository';
 import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './auth/sign-in-limits';
 import { apiNotFound, errorHandler } from './http/error-handler';
 import { DEFAULT_PUBLIC_LIMITS, publicLimiters, type PublicLimits } from './http/public-limits';
+import { databaseCounters } from './db/shared-counters';
 import { requestGuards } from './http/request-guards';
 import { requireSameOrigin } from './http/same-origin';
 import { UsersRepository } from './users/users.repository';
@@ -26,6 +27,7 @@ import { CatalogueStore } from './catalogue/catalogue.repository';
 import { CatalogueService } from './catalogue/catalogue.service';
 import { CatalogueCsvService } from './catalogue/catalogue-csv.service';
 import { ImportJobs } from './catalogue/csv-import/import-jobs';
+import { ImportJobRepository } from './catalogue/csv-import/import-job.repository';
 import { datasheetsRouter } from './datasheets/datasheets.router';
 import { DatasheetsService } from './datasheets/datasheets.service';
 import { FlexPartsRepository } from './flex-parts/flex-parts.repository';
@@ -78,7 +80,8 @@ export interface AppOptions {
 export function createApp(dataSource: DataSource, options: AppOptions) {
   const auth = createLucia(dataSource);
   const usersRepository = new UsersRepository(dataSource);
-  const signInLimiter = new SignInLimiter({ ...DEFAULT_SIGN_IN_LIMITS, ...options.signInLimits });
+  const counters = databaseCounters(dataSource);
+  const signInLimiter = new SignInLimiter({ ...DEFAULT_SIGN_IN_LIMITS, ...options.signInLimits }, counters);
   const authService = new AuthService(usersRepository, auth, signInLimiter, new KnownAddressesRepository(dataSource), options.mailer);
   const usersService = new UsersService(usersRepository, auth);
   const catalogueStore = new CatalogueStore(dataSource);
@@ -141,10 +144,10 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.use('/settings', shopSettingsRouter(shopSettings));
   api.use('/quotes', quotesRouter(quotes, options.publicUrl));
   api.use(depositsRouter(deposits, options.publicUrl));
-  api.use('/public', ...publicLimiters({ ...DEFAULT_PUBLIC_LIMITS, ...options.publicLimits }), publicQuotesRouter(quotes, options.publicUrl), publicDepositRouter(deposits, options.publicUrl));
+  api.use('/public', ...publicLimiters({ ...DEFAULT_PUBLIC_LIMITS, ...options.publicLimits }, counters), publicQuotesRouter(quotes, options.publicUrl), publicDepositRouter(deposits, options.publicUrl));
   api.use('/outbox', outboxRouter(new OutboxRepository(dataSource)));
   api.use('/me', preferencesRouter(new PreferencesService(new PreferencesRepository(dataSource))));
-  api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore, new ImportJobs()), new CatalogueReviewService(catalogueStore, catalogueService), new CatalogueVersionsService(catalogueStore, catalogueService)));
+  api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore, new ImportJobs(new ImportJobRepository(dataSource))), new CatalogueReviewService(catalogueStore, catalogueService), new CatalogueVersionsService(catalogueStore, catalogueService)));
   api.use(apiNotFound);
   api.use(errorHandler);
   app.use('/api', api);

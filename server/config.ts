@@ -40,6 +40,7 @@ const envSchema = z.object({
     .max(65535, { error: 'must be between 1 and 65535' })
     .default(8080),
   DATA_DIR: z.string().min(1, { error: 'must not be empty' }).default('./data'),
+  DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\/.+/, { error: 'must be a postgres:// URL (leave it unset for the embedded SQLite database)' }).optional(),
   SEED_DEMO: booleanFlag.default(true),
   SEED_CATALOGUE: booleanFlag.default(true),
   SMTP_URL: z.url({ protocol: /^smtps?$/, error: 'must be an smtp:// or smtps:// URL' }).optional(),
@@ -54,7 +55,9 @@ const envSchema = z.object({
 export interface Config {
   port: number;
   dataDir: string;
+  /** The SQLite file, or the PostgreSQL URL when DATABASE_URL is set. */
   databasePath: string;
+  onPostgres: boolean;
   uploadsDir: string;
   webDir: string;
   seedDemo: boolean;
@@ -96,7 +99,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
   return {
     port: e.PORT,
     dataDir,
-    databasePath: path.join(dataDir, 'dilato.sqlite'),
+    databasePath: e.DATABASE_URL ?? path.join(dataDir, 'dilato.sqlite'),
+    onPostgres: e.DATABASE_URL !== undefined,
     uploadsDir: path.join(dataDir, 'uploads'),
     webDir: path.resolve(e.WEB_DIR ?? 'dist'),
     seedDemo: e.SEED_DEMO,

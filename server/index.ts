@@ -5,6 +5,7 @@ import { ConfigError, loadConfig } from './config';
 import { answerClientErrors } from './http/request-guards';
 import { openDatabase } from './db/data-source';
 import { seed } from './seed/seed';
+import { clearExpiredCounters } from './db/shared-counters';
 import { startFakeSmtp } from './mail/fake-smtp';
 import { Mailer } from './mail/mailer';
 import { OutboxRepository } from './mail/outbox.repository';
@@ -45,8 +46,11 @@ async function main() {
   });
 
   answerClientErrors(server);
+  const sweep = setInterval(() => clearExpiredCounters(dataSource).catch((err) => console.error('[dilato] clearing old rate-limit counters:', err)), 60 * 60 * 1000);
+  sweep.unref();
 
   const stop = () => {
+    clearInterval(sweep);
     server.close(() => {
       mailer.close();
       void Promise.all([fakeSmtp?.close(), fakePayments?.close(), dataSource.destroy()]).finally(() => process.exit(0));

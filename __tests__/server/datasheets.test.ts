@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { Datasheet } from '../../server/catalogue/catalogue.entities';
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import { ROLES } from '../../shared/schemas/auth';
 import { client, createTestApp, expectErrorShape, HOST, ORIGIN, signedIn, type TestApp } from './test-app';
@@ -22,8 +23,7 @@ async function alloyId(uns = 'S32100'): Promise<string> {
 
 const storedFiles = () => fs.readdirSync(t.uploadsDir);
 async function datasheetRows(): Promise<number> {
-  const rows = await t.dataSource.query('SELECT count(*) AS n FROM datasheet');
-  return rows[0].n;
+  return t.dataSource.getRepository(Datasheet).count();
 }
 
 describe('uploading a data sheet', () => {
@@ -205,7 +205,7 @@ describe('download type and name', () => {
   it('when a row stored before names its file .html, then the download is still a PDF named .pdf', async () => {
     const eng = await signedIn(t.app, 'engineer');
     const up = await eng.post(`/api/alloys/${await alloyId()}/datasheets`).attach('file', PDF, { filename: 'old.pdf', contentType: 'application/pdf' });
-    await t.dataSource.query(`UPDATE datasheet SET original_name = 'old\u202Elmth.html' WHERE id = ?`, [up.body.datasheet.id]);
+    await t.dataSource.getRepository(Datasheet).update({ id: up.body.datasheet.id }, { originalName: 'old\u202Elmth.html' });
     const download = await eng.get(`/api/datasheets/${up.body.datasheet.id}`).buffer(true);
     expect(download.headers['content-type']).toBe('application/pdf');
     expect(download.headers['content-disposition'].replace(/"/g, '')).toBe('attachment; filename=oldlmth.pdf');

@@ -1,4 +1,5 @@
 import request from 'supertest';
+import { Quote } from '../../server/quotes/quote.entities';
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import { ROLES, type Role } from '../../shared/schemas/auth';
 import type { QuoteView } from '../../shared/schemas/quotes';
@@ -126,7 +127,7 @@ describe('building and sending a quote', () => {
     const quote = await draftQuote(sales);
     await sales.post(`/api/quotes/${quote.id}/send`).send({});
     const token = await tokenFromOutbox(sales, 'oda@example.test');
-    await t.dataSource.query(`UPDATE quote SET valid_until = '2020-01-01' WHERE id = ?`, [quote.id]);
+    await t.dataSource.getRepository(Quote).update({ id: quote.id }, { validUntil: '2020-01-01' });
     const expired = await request(t.app).get(`/api/public/quotes/${token}`).set('Host', HOST);
     expect(expired.status).toBe(410);
     expectErrorShape(expired.body, 'quote_expired');

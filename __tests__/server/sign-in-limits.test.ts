@@ -1,3 +1,5 @@
+import { Like } from 'typeorm';
+import { MailMessage } from '../../server/mail/mail-message.entity';
 import { DEMO_PASSWORD } from '../../server/seed/demo-users';
 import { client, createTestApp, demoEmail, expectErrorShape, type TestApp } from './test-app';
 
@@ -12,7 +14,9 @@ async function attempt(email: string, password: string, from = '203.0.113.1', fo
 }
 
 const outboxFor = async (email: string) =>
-  (await t.dataSource.query('SELECT subject, text FROM mail_message WHERE to_addresses LIKE ?', [`%${email}%`])) as { subject: string; text: string }[];
+  (await t.dataSource.getRepository(MailMessage).find({ where: { to: Like(`%${email}%`) }, order: { receivedAt: 'ASC' } })).map(
+    ({ subject, text }) => ({ subject, text }),
+  );
 
 describe('failed sign-ins are limited by account and address together', () => {
   it('when a stranger fails 10 times for an account, then that address is refused, the owner still signs in from home and is told in words', async () => {

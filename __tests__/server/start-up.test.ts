@@ -3,9 +3,11 @@ import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import { ConfigError, loadConfig } from '../../server/config';
-import { openDatabase, rawDatabase } from '../../server/db/data-source';
+import { createDataSource, MIGRATIONS, openDatabase, rawDatabase } from '../../server/db/data-source';
 import { seed } from '../../server/seed/seed';
+import { User } from '../../server/users/user.entity';
 import { createTestApp, HOST } from './test-app';
+import { onSqliteOnly, openTestDatabase, testingOnPostgres } from './test-database';
 
 describe('configuration', () => {
   it('when nothing is set, then the embedded defaults apply', () => {
@@ -42,7 +44,7 @@ describe('configuration', () => {
   });
 });
 
-describe('database', () => {
+onSqliteOnly()('database file (SQLite)', () => {
   let dir: string;
   beforeEach(() => {
     dir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-db-'));
@@ -57,23 +59,26 @@ describe('database', () => {
     expect(db.pragma('foreign_keys', { simple: true })).toBe(1);
     await ds.destroy();
   });
+});
 
+describe('database', () => {
   it('when the demo seed runs twice, then the four demo users exist once each', async () => {
-    const file = path.join(dir, 'dilato.sqlite');
-    const first = await openDatabase(file);
-    expect((await seed(first, { demo: true })).demoUsers).toBe(4);
-    await first.destroy();
-    const second = await openDatabase(file);
+    const db = await openTestDatabase({ reopenable: true });
+    expect((await seed(db.dataSource, { demo: true })).demoUsers).toBe(4);
+    await db.dataSource.destroy();
+    // Opened again from its file or URL: a second start on the same data.
+    const second = await openDatabase(db.url);
     expect((await seed(second, { demo: true })).demoUsers).toBe(0);
-    expect(rawDatabase(second).prepare('SELECT count(*) AS n FROM app_user').get()).toEqual({ n: 4 });
+    expect(await second.getRepository(User).count()).toBe(4);
     await second.destroy();
+    await db.close();
   });
 
   it('when demo seeding is off, then no demo accounts exist', async () => {
-    const ds = await openDatabase(':memory:');
-    await seed(ds, { demo: false });
-    expect(rawDatabase(ds).prepare('SELECT count(*) AS n FROM app_user').get()).toEqual({ n: 0 });
-    await ds.destroy();
+    const db = await openTestDatabase();
+    await seed(db.dataSource, { demo: false });
+    expect(await db.dataSource.getRepository(User).count()).toBe(0);
+    await db.close();
   });
 });
 
@@ -95,5 +100,39 @@ describe('serving the web app', () => {
     expect(api.body.error.code).toBe('not_found');
     await t.close();
     fs.rmSync(webDir, { recursive: true, force: true });
+  });
+});
+
+describe('choosing the database', () => {
+  it('when DATABASE_URL names PostgreSQL, then the configuration says so; a non-postgres URL stops start-up naming it', () => {
+    expect(loadConfig({ DATABASE_URL: 'postgres://dilato@db.internal:5432/dilato' })).toMatchObject({ onPostgres: true, databasePath: 'postgres://dilato@db.internal:5432/dilato' });
+    expect(loadConfig({}).onPostgres).toBe(false);
+    expect(() => loadConfig({ DATABASE_URL: 'mysql://db/dilato' })).toThrow(/DATABASE_URL: must be a postgres:\/\/ URL/);
+  });
+
+  it('when this process chose its column types for one kind of database, then opening the other kind is refused', () => {
+    const other = testingOnPostgres() ? path.join(os.tmpdir(), 'never-made.sqlite') : 'postgres://nobody@127.0.0.1:1/none';
+    expect(() => createDataSource(other)).toThrow(/column types are chosen at start/);
+  });
+});
+
+describe('migration names', () => {
+  it('when the migrations were rewritten for both databases, then the first twelve keep the names already recorded in existing databases', () => {
+    // The `migrations` table of a database made before PostgreSQL support lists exactly these; a renamed one would run again.
+    expect(MIGRATIONS.slice(0, 12).map((m) => new m().name)).toEqual([
+      'UsersAndSessions1764600000000',
+      'Catalogue1764600100000',
+      'Jobs1764600200000',
+      'UserPreferences1764600210000',
+      'QuotesAndMail1764600300000',
+      'FlexPartRatings1764600400000',
+      'AlloyDataCautions1764600500000',
+      'CurrencyRates1764600510000',
+      'SignInAddresses1764600600000',
+      'Activity1764600610000',
+      'RunSupportsAndNearby1764600700000',
+      'QuoteDeposits1764600900000',
+    ]);
+    expect(MIGRATIONS.every((m) => new m().name === m.name)).toBe(true);
   });
 });

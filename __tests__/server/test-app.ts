@@ -4,15 +4,14 @@ import path from 'node:path';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { createApp, type AppOptions } from '../../server/app';
-import { openDatabase } from '../../server/db/data-source';
 import { DEMO_PASSWORD, DEMO_USERS } from '../../server/seed/demo-users';
-import { seed } from '../../server/seed/seed';
 import { startFakeSmtp } from '../../server/mail/fake-smtp';
 import { Mailer } from '../../server/mail/mailer';
 import { OutboxRepository } from '../../server/mail/outbox.repository';
 import { startFakeProvider, type FakeProvider } from '../../server/payments/fake-provider';
 import { createPaymentsClient } from '../../server/payments/payments-client';
 import type { Role } from '../../shared/schemas/auth';
+import { openTestDatabase } from './test-database';
 
 export const HOST = 'dilato.test';
 export const ORIGIN = `http://${HOST}`;
@@ -29,12 +28,13 @@ export interface TestApp {
 type TestOptions = Partial<AppOptions> & { demo?: boolean; catalogue?: boolean };
 
 /**
- * A real app on a real in-memory SQLite database, migrated and seeded like a first start
+ * A real app on a real database (in-memory SQLite, or a fresh PostgreSQL database when the suite runs
+ * with DATABASE_URL; see `test-database.ts`), migrated and seeded like a first start
  * (reference catalogue and demo shop), with its own uploads folder.
  */
 export async function createTestApp(options: TestOptions = {}): Promise<TestApp> {
-  const dataSource = await openDatabase(':memory:');
-  await seed(dataSource, { demo: options.demo ?? true, catalogue: options.catalogue ?? true });
+  const database = await openTestDatabase({ seed: { demo: options.demo ?? true, catalogue: options.catalogue ?? true } });
+  const dataSource = database.dataSource;
   const uploadsDir = options.uploadsDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-uploads-'));
   const smtp = await startFakeSmtp(new OutboxRepository(dataSource));
   const mailer = new Mailer(smtp.url);
@@ -57,7 +57,7 @@ export async function createTestApp(options: TestOptions = {}): Promise<TestApp>
       mailer.close();
       await payments.close();
       await smtp.close();
-      await dataSource.destroy();
+      await database.close();
       fs.rmSync(uploadsDir, { recursive: true, force: true });
     },
   };

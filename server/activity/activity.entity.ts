@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { columnType } from '../db/column-types';
 import type { ActivityAction, ActivityChange, ActivitySubject } from '../../shared/schemas/activity';
 
 @Entity({ name: 'activity' })
@@ -13,5 +14,5 @@ export class ActivityEntry {
   @Column('simple-json') changes: ActivityChange[];
   @Column('varchar', { name: 'user_id', nullable: true }) userId: string | null;
   @Column('varchar', { name: 'user_name', nullable: true }) userName: string | null;
-  @Column('datetime') at: Date;
+  @Column(columnType.time) at: Date;
 }

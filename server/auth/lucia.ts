@@ -1,7 +1,8 @@
 import { BetterSqlite3Adapter } from '@lucia-auth/adapter-sqlite';
+import { NodePostgresAdapter } from '@lucia-auth/adapter-postgresql';
 import { Lucia, TimeSpan } from 'lucia';
 import type { DataSource } from 'typeorm';
-import { rawDatabase } from '../db/data-source';
+import { isPostgres, rawDatabase, rawPool } from '../db/data-source';
 import type { Role } from '../../shared/schemas/auth';
 
 interface UserColumns {
@@ -12,7 +13,8 @@ interface UserColumns {
 }
 
 export function createLucia(dataSource: DataSource) {
-  const adapter = new BetterSqlite3Adapter(rawDatabase(dataSource), { user: 'app_user', session: 'user_session' });
+  const tables = { user: 'app_user', session: 'user_session' };
+  const adapter = isPostgres(dataSource) ? new NodePostgresAdapter(rawPool(dataSource), tables) : new BetterSqlite3Adapter(rawDatabase(dataSource), tables);
   return new Lucia(adapter, {
     sessionExpiresIn: new TimeSpan(14, 'd'),
     sessionCookie: {

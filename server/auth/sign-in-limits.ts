@@ -1,6 +1,7 @@
 import { createHash } from 'node:crypto';
 import { ipKeyGenerator } from 'express-rate-limit';
-import { RateLimiterMemory } from 'rate-limiter-flexible';
+import type { RateLimiterAbstract } from 'rate-limiter-flexible';
+import type { Counters } from '../db/shared-counters';
 import { AppError } from '../http/app-error';
 
 export interface SignInLimits {
@@ -54,18 +55,19 @@ export interface Attempt {
  * strange addresses they are refused, per account-and-address, per address, and per account.
  */
 export class SignInLimiter {
-  private readonly pair: RateLimiterMemory;
-  private readonly address: RateLimiterMemory;
-  private readonly account: RateLimiterMemory;
+  private readonly pair: RateLimiterAbstract;
+  private readonly address: RateLimiterAbstract;
+  private readonly account: RateLimiterAbstract;
 
   constructor(
     readonly limits: SignInLimits,
+    counters: Counters,
     private readonly sleep: (ms: number) => Promise<void> = (ms) => new Promise((r) => setTimeout(r, ms)),
   ) {
     const duration = Math.ceil(limits.windowMs / 1000);
-    this.pair = new RateLimiterMemory({ points: limits.perPair, duration });
-    this.address = new RateLimiterMemory({ points: limits.perAddress, duration });
-    this.account = new RateLimiterMemory({ points: limits.perAccount, duration });
+    this.pair = counters('sign_in_pair', limits.perPair, duration);
+    this.address = counters('sign_in_address', limits.perAddress, duration);
+    this.account = counters('sign_in_account', limits.perAccount, duration);
   }
 
   private pairKey = (a: Attempt) => `${a.email}|${a.address}`;

@@ -73,7 +73,7 @@ export class CatalogueCsvService {
   }
 
   /** Refuses a file without the right columns at once; everything else runs in the background (see `ImportJobs`). */
-  startImport(csv: string, actor: Actor): ImportJobView {
+  async startImport(csv: string, actor: Actor): Promise<ImportJobView> {
     const header = csvHeader(csv);
     const missing = CSV_COLUMNS.filter((c) => !header.includes(c));
     if (missing.length > 0) {
@@ -82,7 +82,7 @@ export class CatalogueCsvService {
     return this.jobs.start(actor?.name ?? null, (progress) => this.runImport(csv, actor, progress));
   }
 
-  importStatus(id: string): ImportJobView {
+  importStatus(id: string): Promise<ImportJobView> {
     return this.jobs.get(id);
   }
 

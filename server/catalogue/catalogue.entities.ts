@@ -14,7 +14,7 @@ export class Source {
   @Column('varchar', { nullable: true }) url: string | null;
   @Column('varchar', { default: '' }) note: string;
   @Column('varchar', { name: 'datasheet_id', nullable: true }) datasheetId: string | null;
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' }) createdAt: Date;
+  @CreateDateColumn({ name: 'created_at', type: columnType.time }) createdAt: Date;
 }
 
 @Entity({ name: 'alloy' })
@@ -29,8 +29,8 @@ export class Alloy {
   @Column('text', { name: 'review_note', default: '' }) reviewNote: string;
   @Column('varchar', { name: 'review_by', nullable: true }) reviewBy: string | null;
   @Column({ type: columnType.time, name: 'review_at', nullable: true }) reviewAt: Date | null;
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' }) createdAt: Date;
-  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' }) updatedAt: Date;
+  @CreateDateColumn({ name: 'created_at', type: columnType.time }) createdAt: Date;
+  @UpdateDateColumn({ name: 'updated_at', type: columnType.time }) updatedAt: Date;
 }
 
 export interface WarningRange {
@@ -54,23 +54,23 @@ export class AlloyVersion {
   @Column('varchar', { name: 'search_text', default: '' }) searchText: string;
   @Column('varchar') uns: string;
   @Column('varchar') family: AlloyFamily;
-  @Column('real', { name: 'density_kg_m3' }) densityKgM3: number;
+  @Column(columnType.real, { name: 'density_kg_m3' }) densityKgM3: number;
   @Column('varchar', { name: 'density_source_id' }) densitySourceId: string;
-  @Column('real', { name: 'max_continuous_c' }) maxContinuousC: number;
-  @Column('real', { name: 'max_intermittent_c' }) maxIntermittentC: number;
+  @Column(columnType.real, { name: 'max_continuous_c' }) maxContinuousC: number;
+  @Column(columnType.real, { name: 'max_intermittent_c' }) maxIntermittentC: number;
   @Column('varchar', { name: 'limits_source_id' }) limitsSourceId: string;
-  @Column('real', { name: 'price_per_kg' }) pricePerKg: number;
+  @Column(columnType.real, { name: 'price_per_kg' }) pricePerKg: number;
   @Column('varchar') currency: string;
   @Column('varchar', { name: 'price_set_on' }) priceSetOn: string;
-  @Column('boolean', { name: 'price_is_demo', default: false }) priceIsDemo: boolean;
-  @Column('real', { name: 'reference_temp_c' }) referenceTempC: number;
+  @Column(columnType.flag, { name: 'price_is_demo', default: false }) priceIsDemo: boolean;
+  @Column(columnType.real, { name: 'reference_temp_c' }) referenceTempC: number;
   @Column('text', { default: '' }) notes: string;
   @Column('text', { name: 'data_cautions', default: '' }) dataCautions: string;
   @Column('simple-json', { name: 'warning_ranges' }) warningRanges: WarningRange[];
   @Column('varchar', { name: 'created_by', nullable: true }) createdBy: string | null;
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' }) createdAt: Date;
+  @CreateDateColumn({ name: 'created_at', type: columnType.time }) createdAt: Date;
   @Column('varchar', { name: 'published_by', nullable: true }) publishedBy: string | null;
-  @Column('datetime', { name: 'published_at', nullable: true }) publishedAt: Date | null;
+  @Column(columnType.time, { name: 'published_at', nullable: true }) publishedAt: Date | null;
 }
 
 export type PropertyKind = 'cte' | 'modulus' | 'yield';
@@ -81,9 +81,9 @@ export class PropertyPoint {
   @PrimaryColumn('varchar') id: string;
   @Column('varchar', { name: 'version_id' }) versionId: string;
   @Column('varchar') kind: PropertyKind;
-  @Column('real', { name: 'temp_c' }) tempC: number;
+  @Column(columnType.real, { name: 'temp_c' }) tempC: number;
   /** µm/m·K for cte, GPa for modulus, MPa for yield. */
-  @Column('real') value: number;
+  @Column(columnType.real) value: number;
   @Column('varchar', { name: 'source_id' }) sourceId: string;
 }
 
@@ -97,7 +97,7 @@ export class AlloyRevision {
   @Column('varchar', { name: 'user_name', nullable: true }) userName: string | null;
   @Column('varchar', { default: '' }) note: string;
   @Column('simple-json') diff: { path: string; before: unknown; after: unknown }[];
-  @Column('datetime') at: Date;
+  @Column(columnType.time) at: Date;
 }
 
 @Entity({ name: 'datasheet' })
@@ -109,5 +109,5 @@ export class Datasheet {
   @Column('integer', { name: 'size_bytes' }) sizeBytes: number;
   @Column('varchar') sha256: string;
   @Column('varchar', { name: 'uploaded_by', nullable: true }) uploadedBy: string | null;
-  @CreateDateColumn({ name: 'uploaded_at', type: 'datetime' }) uploadedAt: Date;
+  @CreateDateColumn({ name: 'uploaded_at', type: columnType.time }) uploadedAt: Date;
 }

@@ -41,16 +41,16 @@ export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvServ
   });
 
   // Answers 202 at once; the client polls the import until it is done.
-  router.post('/alloys/import', editors, csvBody, (req, res) => {
+  router.post('/alloys/import', editors, csvBody, async (req, res) => {
     if (typeof req.body !== 'string' || req.body.trim() === '') {
       throw AppError.badRequest('invalid_csv', 'Send the CSV as the request body (text/csv).', { file: 'Empty or not CSV' });
     }
-    const job = csv.startImport(req.body, req.user!);
+    const job = await csv.startImport(req.body, req.user!);
     res.status(202).location(`/api/alloys/imports/${job.id}`).json({ import: job });
   });
 
-  router.get('/alloys/imports/:id', editors, (req, res) => {
-    res.json({ import: csv.importStatus(req.params.id as string) });
+  router.get('/alloys/imports/:id', editors, async (req, res) => {
+    res.json({ import: await csv.importStatus(req.params.id as string) });
   });
 
   router.get('/alloys/review-queue', admins, async (_req, res) => {

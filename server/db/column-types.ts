@@ -13,8 +13,9 @@ const onPostgres = () => databaseKind() === 'postgres';
 
 export const columnType = {
   /** A point in time; PostgreSQL keeps the zone so both give back the same instant. */
-  get time(): 'timestamptz' | 'datetime' {
-    return onPostgres() ? 'timestamptz' : 'datetime';
+  // Spelled out (not 'timestamptz'), so TypeScript takes both in @Column's one precision overload.
+  get time(): 'timestamp with time zone' | 'datetime' {
+    return onPostgres() ? 'timestamp with time zone' : 'datetime';
   },
   /** A measured value: 8-byte float on both (SQLite's REAL is already 8 bytes). */
   get real(): 'double precision' | 'real' {

@@ -1,5 +1,6 @@
 import 'reflect-metadata';
 import { DataSource } from 'typeorm';
+import { databaseKind } from './column-types';
 import { Alloy, AlloyRevision, AlloyVersion, Datasheet, PropertyPoint, Source } from '../catalogue/catalogue.entities';
 import { FlexPartRow } from '../flex-parts/flex-part.entity';
 import { User } from '../users/user.entity';
@@ -34,6 +35,10 @@ import { CacheStamp } from '../cache/cache-stamp.entity';
 import { ListIndexes1764601600000 } from './migrations/1764601600000-list-indexes';
 import { DesignationKey1764601610000 } from './migrations/1764601610000-designation-key';
 import { CacheStamps1764601620000 } from './migrations/1764601620000-cache-stamps';
+import { InsertionOrder1764601500000 } from './migrations/1764601500000-insertion-order';
+import { RateLimits1764601510000 } from './migrations/1764601510000-rate-limits';
+import { ImportJobs1764601520000 } from './migrations/1764601520000-import-jobs';
+import { ImportJobRow } from '../catalogue/csv-import/import-job.entity';
 
 export const ENTITIES = [
   User,
@@ -60,6 +65,7 @@ export const ENTITIES = [
   WeldRuleRevision,
   QuoteLimitOverride,
   CacheStamp,
+  ImportJobRow,
 ];
 export const MIGRATIONS = [
   UsersAndSessions1764600000000,
@@ -82,10 +88,31 @@ export const MIGRATIONS = [
   ListIndexes1764601600000,
   DesignationKey1764601610000,
   CacheStamps1764601620000,
+  InsertionOrder1764601500000,
+  RateLimits1764601510000,
+  ImportJobs1764601520000,
 ];
 
-/** `database` is a file path, or ':memory:' for tests. */
+/**
+ * `database` is a SQLite file path (':memory:' for tests) or a `postgres://` URL. Entities pick their
+ * column types from DATABASE_URL when they load, so the URL opened must be of the same kind.
+ */
 export function createDataSource(database: string): DataSource {
+  const kind = databaseKind(database);
+  if (kind !== databaseKind()) {
+    throw new Error(`cannot open a ${kind} database in a process whose DATABASE_URL names ${databaseKind()}: column types are chosen at start`);
+  }
+  if (kind === 'postgres') {
+    return new DataSource({
+      type: 'postgres',
+      url: database,
+      entities: ENTITIES,
+      migrations: MIGRATIONS,
+      synchronize: false,
+      migrationsRun: false,
+      poolSize: 10,
+    });
+  }
   return new DataSource({
     type: 'better-sqlite3',
     database,
@@ -112,7 +139,14 @@ export async function openDatabase(database: string): Promise<DataSource> {
   return dataSource;
 }
 
-/** The raw better-sqlite3 handle under TypeORM, shared with lucia's session adapter. */
+export const isPostgres = (dataSource: DataSource) => dataSource.options.type === 'postgres';
+
+/** The raw better-sqlite3 handle under TypeORM, shared with lucia's SQLite session adapter. */
 export function rawDatabase(dataSource: DataSource): import('better-sqlite3').Database {
   return (dataSource.driver as unknown as { databaseConnection: import('better-sqlite3').Database }).databaseConnection;
+}
+
+/** TypeORM's pg pool, shared with lucia's PostgreSQL session adapter. */
+export function rawPool(dataSource: DataSource): import('pg').Pool {
+  return (dataSource.driver as unknown as { master: import('pg').Pool }).master;
 }

@@ -2,5 +2,6 @@
 export function isUniqueViolation(err: unknown): boolean {
   const e = err as { code?: string; driverError?: { code?: string } } | null;
   const code = e?.driverError?.code ?? e?.code;
-  return code === 'SQLITE_CONSTRAINT_UNIQUE' || code === 'SQLITE_CONSTRAINT_PRIMARYKEY';
+  // 23505 is PostgreSQL's unique_violation.
+  return code === 'SQLITE_CONSTRAINT_UNIQUE' || code === 'SQLITE_CONSTRAINT_PRIMARYKEY' || code === '23505';
 }

@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { columnType } from '../db/column-types';
 import type { FixedPointId } from '../../shared/jobs/fixed-points';
 import type { Joint, JobStatus, NearbyItem, Support } from '../../shared/schemas/jobs';
 import type { Segment } from '../../shared/engine/types';
@@ -13,8 +14,8 @@ export class Job {
   @Column('text', { default: '' }) notes: string;
   @Column('varchar', { name: 'created_by', nullable: true }) createdBy: string | null;
   // Set by the service, not TypeORM: a change to any run touches its job too.
-  @Column('datetime', { name: 'created_at' }) createdAt: Date;
-  @Column('datetime', { name: 'updated_at' }) updatedAt: Date;
+  @Column(columnType.time, { name: 'created_at' }) createdAt: Date;
+  @Column(columnType.time, { name: 'updated_at' }) updatedAt: Date;
 }
 
 /** A length of tube between two fixed points. Results are never stored: they are computed on every read. */
@@ -26,9 +27,9 @@ export class JobRun {
   @Column('integer') position: number;
   @Column('varchar') name: string;
   @Column('varchar', { name: 'alloy_id' }) alloyId: string;
-  @Column('real', { name: 'od_mm' }) odMm: number;
-  @Column('real', { name: 'wall_mm' }) wallMm: number;
-  @Column('real', { name: 'install_temp_c' }) installTempC: number;
+  @Column(columnType.real, { name: 'od_mm' }) odMm: number;
+  @Column(columnType.real, { name: 'wall_mm' }) wallMm: number;
+  @Column(columnType.real, { name: 'install_temp_c' }) installTempC: number;
   @Column('simple-json') segments: Segment[];
   @Column('varchar', { name: 'start_fixing' }) startFixing: FixedPointId;
   @Column('varchar', { name: 'end_fixing' }) endFixing: FixedPointId;
@@ -38,6 +39,6 @@ export class JobRun {
   @Column('simple-json', { default: '[]' }) supports: Support[];
   @Column('simple-json', { default: '[]' }) nearby: NearbyItem[];
   @Column('text', { default: '' }) notes: string;
-  @Column('datetime', { name: 'created_at' }) createdAt: Date;
-  @Column('datetime', { name: 'updated_at' }) updatedAt: Date;
+  @Column(columnType.time, { name: 'created_at' }) createdAt: Date;
+  @Column(columnType.time, { name: 'updated_at' }) updatedAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { columnType } from '../db/column-types';
 
 /** A message as the embedded SMTP server received it: what the outbox screen shows. */
 @Entity({ name: 'mail_message' })
@@ -11,5 +12,5 @@ export class MailMessage {
   @Column('text') text: string;
   @Column('text') html: string;
   @Column('integer', { name: 'size_bytes' }) sizeBytes: number;
-  @Column('datetime', { name: 'received_at' }) receivedAt: Date;
+  @Column(columnType.time, { name: 'received_at' }) receivedAt: Date;
 }

@@ -1,4 +1,5 @@
 import { Column, Entity, PrimaryColumn } from 'typeorm';
+import { columnType } from '../db/column-types';
 import type { DepositStatus } from '../../shared/schemas/deposits';
 
 /** One quote's deposit, from the first "Pay deposit" on; the amount is fixed then. */
@@ -19,10 +20,10 @@ export class Deposit {
   @Column('varchar', { name: 'failure_message', nullable: true }) failureMessage: string | null;
   @Column('varchar', { name: 'refund_id', nullable: true }) refundId: string | null;
   @Column('varchar', { name: 'refund_reason', nullable: true }) refundReason: string | null;
-  @Column('datetime', { name: 'paid_at', nullable: true }) paidAt: Date | null;
-  @Column('datetime', { name: 'refunded_at', nullable: true }) refundedAt: Date | null;
-  @Column('datetime', { name: 'created_at' }) createdAt: Date;
-  @Column('datetime', { name: 'updated_at' }) updatedAt: Date;
+  @Column(columnType.time, { name: 'paid_at', nullable: true }) paidAt: Date | null;
+  @Column(columnType.time, { name: 'refunded_at', nullable: true }) refundedAt: Date | null;
+  @Column(columnType.time, { name: 'created_at' }) createdAt: Date;
+  @Column(columnType.time, { name: 'updated_at' }) updatedAt: Date;
 }
 
 /** Provider events already handled, so a replayed webhook changes nothing. */
@@ -30,5 +31,5 @@ export class Deposit {
 export class PaymentEventSeen {
   @PrimaryColumn('varchar') id: string;
   @Column('varchar') type: string;
-  @Column('datetime', { name: 'received_at' }) receivedAt: Date;
+  @Column(columnType.time, { name: 'received_at' }) receivedAt: Date;
 }

@@ -27,9 +27,9 @@ export class Quote {
   @Column('integer', { name: 'accepted_option_index', nullable: true }) acceptedOptionIndex: number | null;
   @Column('varchar', { name: 'decided_by', nullable: true }) decidedBy: string | null;
   @Column('varchar', { name: 'created_by', nullable: true }) createdBy: string | null;
-  @Column('datetime', { name: 'created_at' }) createdAt: Date;
-  @Column('datetime', { name: 'updated_at' }) updatedAt: Date;
-  @Column('datetime', { name: 'sent_at', nullable: true }) sentAt: Date | null;
+  @Column(columnType.time, { name: 'created_at' }) createdAt: Date;
+  @Column(columnType.time, { name: 'updated_at' }) updatedAt: Date;
+  @Column(columnType.time, { name: 'sent_at', nullable: true }) sentAt: Date | null;
 }
 
 @Entity({ name: 'quote_event' })
@@ -39,7 +39,7 @@ export class QuoteEvent {
   @Column('varchar') status: QuoteStatus;
   @Column('varchar', { default: '' }) note: string;
   @Column('varchar', { nullable: true }) by: string | null;
-  @Column('datetime') at: Date;
+  @Column(columnType.time) at: Date;
 }
 
 /** An engineer's or admin's reason for offering an option that runs over its temperature limit. */

@@ -1,4 +1,5 @@
 import { Column, CreateDateColumn, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import { columnType } from '../db/column-types';
 import type { Role } from '../../shared/schemas/auth';
 
 @Entity({ name: 'app_user' })
@@ -18,12 +19,12 @@ export class User {
   @Column('varchar', { name: 'password_hash' })
   passwordHash: string;
 
-  @Column('boolean', { default: true })
+  @Column(columnType.flag, { default: true })
   active: boolean;
 
-  @CreateDateColumn({ name: 'created_at', type: 'datetime' })
+  @CreateDateColumn({ name: 'created_at', type: columnType.time })
   createdAt: Date;
 
-  @UpdateDateColumn({ name: 'updated_at', type: 'datetime' })
+  @UpdateDateColumn({ name: 'updated_at', type: columnType.time })
   updatedAt: Date;
 }

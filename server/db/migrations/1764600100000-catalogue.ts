@@ -1,109 +1,157 @@
-import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { Table, TableIndex, type MigrationInterface, type QueryRunner, type TableForeignKeyOptions } from 'typeorm';
+import { columnType } from '../column-types';
+import { EMPTY_TEXT, flagDefault, NOW } from './schema-defaults';
+
+const refersTo = (column: string, table: string, onDelete?: string): TableForeignKeyOptions => ({
+  columnNames: [column],
+  referencedTableName: table,
+  referencedColumnNames: ['id'],
+  onDelete,
+});
 
 export class Catalogue1764600100000 implements MigrationInterface {
   name = 'Catalogue1764600100000';
 
   async up(q: QueryRunner): Promise<void> {
-    await q.query(`CREATE TABLE "source" (
-      "id" varchar PRIMARY KEY NOT NULL,
-      "key" varchar UNIQUE,
-      "kind" varchar NOT NULL CHECK ("kind" IN ('standard','handbook','datasheet','memory')),
-      "title" varchar NOT NULL,
-      "issuer" varchar NOT NULL DEFAULT (''),
-      "edition" varchar NOT NULL DEFAULT (''),
-      "url" varchar,
-      "note" varchar NOT NULL DEFAULT (''),
-      "datasheet_id" varchar,
-      "created_at" datetime NOT NULL DEFAULT (datetime('now'))
-    )`);
-    await q.query(`CREATE TABLE "alloy" (
-      "id" varchar PRIMARY KEY NOT NULL,
-      "uns" varchar NOT NULL UNIQUE,
-      "status" varchar NOT NULL CHECK ("status" IN ('draft','published','retired')),
-      "published_version_id" varchar,
-      "draft_version_id" varchar,
-      "created_at" datetime NOT NULL DEFAULT (datetime('now')),
-      "updated_at" datetime NOT NULL DEFAULT (datetime('now'))
-    )`);
-    await q.query(`CREATE TABLE "alloy_version" (
-      "id" varchar PRIMARY KEY NOT NULL,
-      "alloy_id" varchar NOT NULL REFERENCES "alloy"("id") ON DELETE CASCADE,
-      "version" integer NOT NULL,
-      "state" varchar NOT NULL CHECK ("state" IN ('draft','published','superseded')),
-      "designation" varchar NOT NULL,
-      "uns" varchar NOT NULL,
-      "family" varchar NOT NULL,
-      "density_kg_m3" real NOT NULL,
-      "density_source_id" varchar NOT NULL REFERENCES "source"("id"),
-      "max_continuous_c" real NOT NULL,
-      "max_intermittent_c" real NOT NULL,
-      "limits_source_id" varchar NOT NULL REFERENCES "source"("id"),
-      "price_per_kg" real NOT NULL,
-      "currency" varchar NOT NULL,
-      "price_set_on" varchar NOT NULL,
-      "price_is_demo" boolean NOT NULL DEFAULT (0),
-      "reference_temp_c" real NOT NULL,
-      "notes" text NOT NULL DEFAULT (''),
-      "warning_ranges" text NOT NULL,
-      "created_by" varchar,
-      "created_at" datetime NOT NULL DEFAULT (datetime('now')),
-      "published_by" varchar,
-      "published_at" datetime
-    )`);
-    await q.query(`CREATE UNIQUE INDEX "idx_alloy_version_number" ON "alloy_version" ("alloy_id", "version")`);
-    await q.query(`CREATE TABLE "property_point" (
-      "id" varchar PRIMARY KEY NOT NULL,
-      "version_id" varchar NOT NULL REFERENCES "alloy_version"("id") ON DELETE CASCADE,
-      "kind" varchar NOT NULL CHECK ("kind" IN ('cte','modulus','yield')),
-      "temp_c" real NOT NULL,
-      "value" real NOT NULL,
-      "source_id" varchar NOT NULL REFERENCES "source"("id")
-    )`);
-    await q.query(`CREATE UNIQUE INDEX "idx_property_point" ON "property_point" ("version_id", "kind", "temp_c")`);
-    await q.query(`CREATE TABLE "alloy_revision" (
-      "id" varchar PRIMARY KEY NOT NULL,
-      "alloy_id" varchar NOT NULL REFERENCES "alloy"("id") ON DELETE CASCADE,
-      "version" integer,
-      "action" varchar NOT NULL,
-      "user_id" varchar,
-      "user_name" varchar,
-      "note" varchar NOT NULL DEFAULT (''),
-      "diff" text NOT NULL,
-      "at" datetime NOT NULL DEFAULT (datetime('now'))
-    )`);
-    await q.query(`CREATE INDEX "idx_alloy_revision_alloy" ON "alloy_revision" ("alloy_id")`);
-    await q.query(`CREATE TABLE "datasheet" (
-      "id" varchar PRIMARY KEY NOT NULL,
-      "alloy_id" varchar NOT NULL REFERENCES "alloy"("id") ON DELETE CASCADE,
-      "original_name" varchar NOT NULL,
-      "stored_name" varchar NOT NULL UNIQUE,
-      "size_bytes" integer NOT NULL,
-      "sha256" varchar NOT NULL,
-      "uploaded_by" varchar,
-      "uploaded_at" datetime NOT NULL DEFAULT (datetime('now'))
-    )`);
-    await q.query(`CREATE TABLE "flex_part" (
-      "id" varchar PRIMARY KEY NOT NULL,
-      "code" varchar NOT NULL UNIQUE,
-      "name" varchar NOT NULL,
-      "bore_mm" real NOT NULL,
-      "live_length_mm" real NOT NULL,
-      "rated_axial_compression_mm" real NOT NULL,
-      "rated_axial_extension_mm" real NOT NULL,
-      "lateral_offset_mm" real NOT NULL,
-      "max_temp_c" real NOT NULL,
-      "price" real NOT NULL,
-      "currency" varchar NOT NULL,
-      "active" boolean NOT NULL DEFAULT (1),
-      "is_demo" boolean NOT NULL DEFAULT (0),
-      "created_at" datetime NOT NULL DEFAULT (datetime('now')),
-      "updated_at" datetime NOT NULL DEFAULT (datetime('now'))
-    )`);
+    await q.createTable(
+      new Table({
+        name: 'source',
+        columns: [
+          { name: 'id', type: 'varchar', isPrimary: true },
+          { name: 'key', type: 'varchar', isNullable: true, isUnique: true },
+          { name: 'kind', type: 'varchar' },
+          { name: 'title', type: 'varchar' },
+          { name: 'issuer', type: 'varchar', default: EMPTY_TEXT },
+          { name: 'edition', type: 'varchar', default: EMPTY_TEXT },
+          { name: 'url', type: 'varchar', isNullable: true },
+          { name: 'note', type: 'varchar', default: EMPTY_TEXT },
+          { name: 'datasheet_id', type: 'varchar', isNullable: true },
+          { name: 'created_at', type: columnType.time, default: NOW },
+        ],
+        checks: [{ name: 'chk_source_kind', expression: `"kind" IN ('standard','handbook','datasheet','memory')` }],
+      }),
+    );
+    await q.createTable(
+      new Table({
+        name: 'alloy',
+        columns: [
+          { name: 'id', type: 'varchar', isPrimary: true },
+          { name: 'uns', type: 'varchar', isUnique: true },
+          { name: 'status', type: 'varchar' },
+          { name: 'published_version_id', type: 'varchar', isNullable: true },
+          { name: 'draft_version_id', type: 'varchar', isNullable: true },
+          { name: 'created_at', type: columnType.time, default: NOW },
+          { name: 'updated_at', type: columnType.time, default: NOW },
+        ],
+        checks: [{ name: 'chk_alloy_status', expression: `"status" IN ('draft','published','retired')` }],
+      }),
+    );
+    await q.createTable(
+      new Table({
+        name: 'alloy_version',
+        columns: [
+          { name: 'id', type: 'varchar', isPrimary: true },
+          { name: 'alloy_id', type: 'varchar' },
+          { name: 'version', type: 'integer' },
+          { name: 'state', type: 'varchar' },
+          { name: 'designation', type: 'varchar' },
+          { name: 'uns', type: 'varchar' },
+          { name: 'family', type: 'varchar' },
+          { name: 'density_kg_m3', type: columnType.real },
+          { name: 'density_source_id', type: 'varchar' },
+          { name: 'max_continuous_c', type: columnType.real },
+          { name: 'max_intermittent_c', type: columnType.real },
+          { name: 'limits_source_id', type: 'varchar' },
+          { name: 'price_per_kg', type: columnType.real },
+          { name: 'currency', type: 'varchar' },
+          { name: 'price_set_on', type: 'varchar' },
+          { name: 'price_is_demo', type: columnType.flag, default: flagDefault(false) },
+          { name: 'reference_temp_c', type: columnType.real },
+          { name: 'notes', type: 'text', default: EMPTY_TEXT },
+          { name: 'warning_ranges', type: columnType.json },
+          { name: 'created_by', type: 'varchar', isNullable: true },
+          { name: 'created_at', type: columnType.time, default: NOW },
+          { name: 'published_by', type: 'varchar', isNullable: true },
+          { name: 'published_at', type: columnType.time, isNullable: true },
+        ],
+        checks: [{ name: 'chk_alloy_version_state', expression: `"state" IN ('draft','published','superseded')` }],
+        foreignKeys: [refersTo('alloy_id', 'alloy', 'CASCADE'), refersTo('density_source_id', 'source'), refersTo('limits_source_id', 'source')],
+        indices: [new TableIndex({ name: 'idx_alloy_version_number', columnNames: ['alloy_id', 'version'], isUnique: true })],
+      }),
+    );
+    await q.createTable(
+      new Table({
+        name: 'property_point',
+        columns: [
+          { name: 'id', type: 'varchar', isPrimary: true },
+          { name: 'version_id', type: 'varchar' },
+          { name: 'kind', type: 'varchar' },
+          { name: 'temp_c', type: columnType.real },
+          { name: 'value', type: columnType.real },
+          { name: 'source_id', type: 'varchar' },
+        ],
+        checks: [{ name: 'chk_property_point_kind', expression: `"kind" IN ('cte','modulus','yield')` }],
+        foreignKeys: [refersTo('version_id', 'alloy_version', 'CASCADE'), refersTo('source_id', 'source')],
+        indices: [new TableIndex({ name: 'idx_property_point', columnNames: ['version_id', 'kind', 'temp_c'], isUnique: true })],
+      }),
+    );
+    await q.createTable(
+      new Table({
+        name: 'alloy_revision',
+        columns: [
+          { name: 'id', type: 'varchar', isPrimary: true },
+          { name: 'alloy_id', type: 'varchar' },
+          { name: 'version', type: 'integer', isNullable: true },
+          { name: 'action', type: 'varchar' },
+          { name: 'user_id', type: 'varchar', isNullable: true },
+          { name: 'user_name', type: 'varchar', isNullable: true },
+          { name: 'note', type: 'varchar', default: EMPTY_TEXT },
+          { name: 'diff', type: columnType.json },
+          { name: 'at', type: columnType.time, default: NOW },
+        ],
+        foreignKeys: [refersTo('alloy_id', 'alloy', 'CASCADE')],
+        indices: [new TableIndex({ name: 'idx_alloy_revision_alloy', columnNames: ['alloy_id'] })],
+      }),
+    );
+    await q.createTable(
+      new Table({
+        name: 'datasheet',
+        columns: [
+          { name: 'id', type: 'varchar', isPrimary: true },
+          { name: 'alloy_id', type: 'varchar' },
+          { name: 'original_name', type: 'varchar' },
+          { name: 'stored_name', type: 'varchar', isUnique: true },
+          { name: 'size_bytes', type: 'integer' },
+          { name: 'sha256', type: 'varchar' },
+          { name: 'uploaded_by', type: 'varchar', isNullable: true },
+          { name: 'uploaded_at', type: columnType.time, default: NOW },
+        ],
+        foreignKeys: [refersTo('alloy_id', 'alloy', 'CASCADE')],
+      }),
+    );
+    await q.createTable(
+      new Table({
+        name: 'flex_part',
+        columns: [
+          { name: 'id', type: 'varchar', isPrimary: true },
+          { name: 'code', type: 'varchar', isUnique: true },
+          { name: 'name', type: 'varchar' },
+          ...['bore_mm', 'live_length_mm', 'rated_axial_compression_mm', 'rated_axial_extension_mm', 'lateral_offset_mm', 'max_temp_c', 'price'].map(
+            (name) => ({ name, type: columnType.real }),
+          ),
+          { name: 'currency', type: 'varchar' },
+          { name: 'active', type: columnType.flag, default: flagDefault(true) },
+          { name: 'is_demo', type: columnType.flag, default: flagDefault(false) },
+          { name: 'created_at', type: columnType.time, default: NOW },
+          { name: 'updated_at', type: columnType.time, default: NOW },
+        ],
+      }),
+    );
   }
 
   async down(q: QueryRunner): Promise<void> {
     for (const table of ['flex_part', 'datasheet', 'alloy_revision', 'property_point', 'alloy_version', 'alloy', 'source']) {
-      await q.query(`DROP TABLE "${table}"`);
+      await q.dropTable(table);
     }
   }
 }

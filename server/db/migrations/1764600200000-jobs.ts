@@ -1,44 +1,67 @@
-import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { Table, TableIndex, type MigrationInterface, type QueryRunner } from 'typeorm';
+import { columnType } from '../column-types';
+import { EMPTY_TEXT } from './schema-defaults';
 
 export class Jobs1764600200000 implements MigrationInterface {
   name = 'Jobs1764600200000';
 
   async up(q: QueryRunner): Promise<void> {
-    await q.query(`CREATE TABLE "job" (
-      "id" varchar PRIMARY KEY NOT NULL,
-      "name" varchar NOT NULL,
-      "customer" varchar NOT NULL,
-      "application" varchar NOT NULL,
-      "status" varchar NOT NULL CHECK ("status" IN ('active','archived')),
-      "notes" text NOT NULL DEFAULT (''),
-      "created_by" varchar REFERENCES "app_user"("id") ON DELETE SET NULL,
-      "created_at" datetime NOT NULL,
-      "updated_at" datetime NOT NULL
-    )`);
-    await q.query(`CREATE INDEX "idx_job_status_updated" ON "job" ("status", "updated_at")`);
+    await q.createTable(
+      new Table({
+        name: 'job',
+        columns: [
+          { name: 'id', type: 'varchar', isPrimary: true },
+          { name: 'name', type: 'varchar' },
+          { name: 'customer', type: 'varchar' },
+          { name: 'application', type: 'varchar' },
+          { name: 'status', type: 'varchar' },
+          { name: 'notes', type: 'text', default: EMPTY_TEXT },
+          { name: 'created_by', type: 'varchar', isNullable: true },
+          { name: 'created_at', type: columnType.time },
+          { name: 'updated_at', type: columnType.time },
+        ],
+        checks: [{ name: 'chk_job_status', expression: `"status" IN ('active','archived')` }],
+        foreignKeys: [{ columnNames: ['created_by'], referencedTableName: 'app_user', referencedColumnNames: ['id'], onDelete: 'SET NULL' }],
+        indices: [new TableIndex({ name: 'idx_job_status_updated', columnNames: ['status', 'updated_at'] })],
+      }),
+    );
     // Segments and the joint are small ordered documents read and written whole with their run.
-    await q.query(`CREATE TABLE "job_run" (
-      "id" varchar PRIMARY KEY NOT NULL,
-      "job_id" varchar NOT NULL REFERENCES "job"("id") ON DELETE CASCADE,
-      "position" integer NOT NULL CHECK ("position" >= 1),
-      "name" varchar NOT NULL,
-      "alloy_id" varchar NOT NULL REFERENCES "alloy"("id"),
-      "od_mm" real NOT NULL CHECK ("od_mm" > 0),
-      "wall_mm" real NOT NULL CHECK ("wall_mm" > 0),
-      "install_temp_c" real NOT NULL,
-      "segments" text NOT NULL,
-      "start_fixing" varchar NOT NULL,
-      "end_fixing" varchar NOT NULL,
-      "joint" text NOT NULL,
-      "notes" text NOT NULL DEFAULT (''),
-      "created_at" datetime NOT NULL,
-      "updated_at" datetime NOT NULL
-    )`);
-    await q.query(`CREATE INDEX "idx_job_run_job_position" ON "job_run" ("job_id", "position")`);
+    await q.createTable(
+      new Table({
+        name: 'job_run',
+        columns: [
+          { name: 'id', type: 'varchar', isPrimary: true },
+          { name: 'job_id', type: 'varchar' },
+          { name: 'position', type: 'integer' },
+          { name: 'name', type: 'varchar' },
+          { name: 'alloy_id', type: 'varchar' },
+          { name: 'od_mm', type: columnType.real },
+          { name: 'wall_mm', type: columnType.real },
+          { name: 'install_temp_c', type: columnType.real },
+          { name: 'segments', type: columnType.json },
+          { name: 'start_fixing', type: 'varchar' },
+          { name: 'end_fixing', type: 'varchar' },
+          { name: 'joint', type: columnType.json },
+          { name: 'notes', type: 'text', default: EMPTY_TEXT },
+          { name: 'created_at', type: columnType.time },
+          { name: 'updated_at', type: columnType.time },
+        ],
+        checks: [
+          { name: 'chk_job_run_position', expression: `"position" >= 1` },
+          { name: 'chk_job_run_od', expression: `"od_mm" > 0` },
+          { name: 'chk_job_run_wall', expression: `"wall_mm" > 0` },
+        ],
+        foreignKeys: [
+          { columnNames: ['job_id'], referencedTableName: 'job', referencedColumnNames: ['id'], onDelete: 'CASCADE' },
+          { columnNames: ['alloy_id'], referencedTableName: 'alloy', referencedColumnNames: ['id'] },
+        ],
+        indices: [new TableIndex({ name: 'idx_job_run_job_position', columnNames: ['job_id', 'position'] })],
+      }),
+    );
   }
 
   async down(q: QueryRunner): Promise<void> {
-    await q.query(`DROP TABLE "job_run"`);
-    await q.query(`DROP TABLE "job"`);
+    await q.dropTable('job_run');
+    await q.dropTable('job');
   }
 }

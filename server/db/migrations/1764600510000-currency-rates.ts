@@ -1,20 +1,26 @@
-import type { MigrationInterface, QueryRunner } from 'typeorm';
+import { Table, type MigrationInterface, type QueryRunner } from 'typeorm';
+import { columnType } from '../column-types';
 
 export class CurrencyRates1764600510000 implements MigrationInterface {
   name = 'CurrencyRates1764600510000';
 
   async up(q: QueryRunner): Promise<void> {
-    await q.query(`CREATE TABLE "currency_rate" (
-      "from_currency" varchar NOT NULL,
-      "to_currency" varchar NOT NULL,
-      "rate" real NOT NULL CHECK ("rate" > 0),
-      "set_by" varchar,
-      "set_at" datetime NOT NULL,
-      PRIMARY KEY ("from_currency", "to_currency")
-    )`);
+    await q.createTable(
+      new Table({
+        name: 'currency_rate',
+        columns: [
+          { name: 'from_currency', type: 'varchar', isPrimary: true },
+          { name: 'to_currency', type: 'varchar', isPrimary: true },
+          { name: 'rate', type: columnType.real },
+          { name: 'set_by', type: 'varchar', isNullable: true },
+          { name: 'set_at', type: columnType.time },
+        ],
+        checks: [{ name: 'chk_currency_rate_positive', expression: `"rate" > 0` }],
+      }),
+    );
   }
 
   async down(q: QueryRunner): Promise<void> {
-    await q.query(`DROP TABLE "currency_rate"`);
+    await q.dropTable('currency_rate');
   }
 }

@@ -1,4 +1,5 @@
 import { type MigrationInterface, type QueryRunner, TableColumn } from 'typeorm';
+import { columnType } from '../column-types';
 
 /** Supports part-way along a run and the items near it whose hot gap is checked. */
 export class RunSupportsAndNearby1764600700000 implements MigrationInterface {
@@ -6,8 +7,8 @@ export class RunSupportsAndNearby1764600700000 implements MigrationInterface {
 
   async up(q: QueryRunner): Promise<void> {
     await q.addColumns('job_run', [
-      new TableColumn({ name: 'supports', type: 'text', isNullable: false, default: "'[]'" }),
-      new TableColumn({ name: 'nearby', type: 'text', isNullable: false, default: "'[]'" }),
+      new TableColumn({ name: 'supports', type: columnType.json, isNullable: false, default: "'[]'" }),
+      new TableColumn({ name: 'nearby', type: columnType.json, isNullable: false, default: "'[]'" }),
     ]);
   }
 

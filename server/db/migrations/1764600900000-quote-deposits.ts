@@ -1,4 +1,5 @@
 import { Table, TableForeignKey, type MigrationInterface, type QueryRunner } from 'typeorm';
+import { columnType } from '../column-types';
 
 export class QuoteDeposits1764600900000 implements MigrationInterface {
   name = 'QuoteDeposits1764600900000';
@@ -21,10 +22,10 @@ export class QuoteDeposits1764600900000 implements MigrationInterface {
           { name: 'failure_message', type: 'varchar', isNullable: true },
           { name: 'refund_id', type: 'varchar', isNullable: true },
           { name: 'refund_reason', type: 'varchar', isNullable: true },
-          { name: 'paid_at', type: 'datetime', isNullable: true },
-          { name: 'refunded_at', type: 'datetime', isNullable: true },
-          { name: 'created_at', type: 'datetime' },
-          { name: 'updated_at', type: 'datetime' },
+          { name: 'paid_at', type: columnType.time, isNullable: true },
+          { name: 'refunded_at', type: columnType.time, isNullable: true },
+          { name: 'created_at', type: columnType.time },
+          { name: 'updated_at', type: columnType.time },
         ],
         foreignKeys: [new TableForeignKey({ columnNames: ['quote_id'], referencedTableName: 'quote', referencedColumnNames: ['id'], onDelete: 'CASCADE' })],
       }),
@@ -35,7 +36,7 @@ export class QuoteDeposits1764600900000 implements MigrationInterface {
         columns: [
           { name: 'id', type: 'varchar', isPrimary: true },
           { name: 'type', type: 'varchar' },
-          { name: 'received_at', type: 'datetime' },
+          { name: 'received_at', type: columnType.time },
         ],
       }),
     );
