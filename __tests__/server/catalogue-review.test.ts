@@ -98,7 +98,7 @@ describe('removing a data sheet', () => {
     const res = await eng.delete(`/api/datasheets/${sheet}`);
     expect(res.status).toBe(200);
     expect(fs.readdirSync(t.uploadsDir)).toHaveLength(0);
-    expect((await t.dataSource.query('SELECT count(*) AS n FROM datasheet'))[0].n).toBe(0);
+    expect(Number((await t.dataSource.query('SELECT count(*) AS n FROM datasheet'))[0].n)).toBe(0);
     expect((await eng.get(`/api/alloys/${id}`)).body.alloy.datasheets).toEqual([]);
     const [latest] = (await eng.get(`/api/alloys/${id}/revisions`)).body.items as RevisionView[];
     expect(latest).toMatchObject({ action: 'datasheet_removed', note: '321 sheet.pdf', by: 'Tomas Lindqvist-Oyelaran' });

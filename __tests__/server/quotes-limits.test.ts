@@ -1,3 +1,4 @@
+import { Quote } from '../../server/quotes/quote.entities';
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import type { PublicQuoteView, QuoteView } from '../../shared/schemas/quotes';
 import { inDays, mailTo, tokenIn } from './quote-helpers';
@@ -122,10 +123,10 @@ describe('options over their temperature limit', () => {
     await (await signedIn(t.app, 'engineer')).post(`/api/quotes/${quote.id}/limit-overrides`).send({ optionIndex: 1, reason: 'Wrapped downpipe on a show car.' });
     const { token } = await sendAndOpen(sales, quote, 'oda@example.test');
     // Strip the frozen overrides, as a quote sent by the earlier release has none.
-    const [row] = await t.dataSource.query('SELECT snapshot FROM quote WHERE id = ?', [quote.id]);
-    const snapshot = JSON.parse(row.snapshot);
+    const quotes = t.dataSource.getRepository(Quote);
+    const snapshot = (await quotes.findOneByOrFail({ id: quote.id })).snapshot as unknown as Record<string, unknown>;
     delete snapshot.limitOverrides;
-    await t.dataSource.query('UPDATE quote SET snapshot = ? WHERE id = ?', [JSON.stringify(snapshot), quote.id]);
+    await quotes.update({ id: quote.id }, { snapshot: snapshot as unknown as Quote['snapshot'] });
 
     const customer = client(t.app);
     const view = (await customer.get(`/api/public/quotes/${token}`)).body.quote as PublicQuoteView;
