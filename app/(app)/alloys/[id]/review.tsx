@@ -15,9 +15,11 @@ import { isApiError, messageOf } from '../../../../hooks/api-client';
 import { useAlloyReviewQuery, useAlloyStatusMutation, useReviewStepMutation } from '../../../../hooks/use-alloys';
 import { SendBackForm } from '../../../../components/alloys/review-step-forms';
 import { useState } from 'react';
+import { useScreenTitle } from '../../../../components/ui/use-screen-title';
 import { useSourcesQuery } from '../../../../hooks/use-sources';
 
 export default function ReviewAlloyScreen() {
+  useScreenTitle('Review the draft', 'Alloy catalogue');
   return (
     <RoleGate roles={['admin']} title="Only an admin publishes catalogue changes">
       <ReviewAlloy />

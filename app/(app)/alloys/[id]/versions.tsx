@@ -1,5 +1,6 @@
 import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
+import { useScreenTitle } from '../../../../components/ui/use-screen-title';
 import { AlloyCharts } from '../../../../components/alloys/alloy-charts';
 import { AlloyProperties } from '../../../../components/alloys/alloy-properties';
 import { CATALOGUE_UNITS } from '../../../../components/alloys/format';
@@ -26,6 +27,7 @@ export default function AlloyVersionsScreen() {
   const [chosen, setChosen] = useState<number>();
   const shownNumber = chosen ?? versions.data?.find((v) => v.state === 'published')?.version ?? versions.data?.[0]?.version;
   const version = useAlloyVersionQuery(id, shownNumber);
+  useScreenTitle(shownNumber === undefined ? 'Past versions' : `Version ${shownNumber}`, version.data?.designation, 'Alloy catalogue');
   const sources = useSourcesQuery();
   const back = <TextLink href={`/alloys/${id}`} label="← Back to the alloy" accessibilityLabel="Back to the alloy" />;
 
