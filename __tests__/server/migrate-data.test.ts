@@ -2,13 +2,14 @@ import { type ChildProcess, execFile } from 'node:child_process';
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import { Client } from 'pg';
 import request from 'supertest';
 import { openPostgres } from '../../scripts/lib/migrate-databases';
 import { tableChecksum, type TableReport } from '../../scripts/lib/migrate-tables';
 import { DEMO_PASSWORD } from '../../server/seed/demo-users';
 import type { Role } from '../../shared/schemas/auth';
 import { routeFixtures, routeList, routeUrl, type RouteFixtures } from './route-list';
-import { createTestApp, demoEmail, HOST, ORIGIN, type TestApp } from './test-app';
+import { createTestApp, demoEmail, HOST, ORIGIN, signedIn, type TestApp } from './test-app';
 import { testingOnPostgres } from './test-database';
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const { throwawayDatabase } = require('../../scripts/lib/postgres-cluster');
@@ -33,7 +34,7 @@ if (!testingOnPostgres() && !postgresInstalled()) {
 
 function migrateData(args: string[]): Promise<{ status: number; stdout: string; stderr: string }> {
   return new Promise((resolve) => {
-    const env = { ...process.env, SWC_NODE_PROJECT: path.join(root, 'server', 'tsconfig.json') };
+    const env: NodeJS.ProcessEnv = { ...process.env, SWC_NODE_PROJECT: path.join(root, 'server', 'tsconfig.json') };
     delete env.DATABASE_URL;
     execFile(process.execPath, ['-r', '@swc-node/register', path.join(root, 'scripts', 'migrate-data.ts'), ...args], { cwd: root, env }, (err, stdout, stderr) =>
       resolve({ status: err ? Number((err as { code?: number }).code ?? 1) : 0, stdout, stderr }),
@@ -78,6 +79,10 @@ function getUrls(t: TestApp, fixtures: RouteFixtures): string[] {
     dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-moved-'));
     // The demo shop plus one of everything: a job with a run, a sent and a draft quote (so mail in the outbox), a data sheet, an import.
     fixtures = await routeFixtures(t);
+    // A flag that is false (the demo data has only true ones): a user who left the shop.
+    const admin = await signedIn(t.app, 'admin');
+    const left = await admin.post('/api/users').send({ email: 'left@example.test', name: 'Former welder', role: 'fabricator', password: 'a long enough password' });
+    expect((await admin.patch(`/api/users/${left.body.user.id}`).send({ active: false })).status).toBe(200);
     // The customer's first look at the sent quote marks it viewed (a write behind a GET); done here, so the comparison reads a settled state.
     expect((await request(t.app).get(`/api/public/quotes/${fixtures.token}`).set('Host', HOST)).status).toBe(200);
     for (const role of ROLES) {
@@ -153,5 +158,19 @@ function getUrls(t: TestApp, fixtures: RouteFixtures): string[] {
     }
     expect(differing).toEqual([]);
     expect([...before.values()].filter((a) => a.status === 200).length).toBeGreaterThan(urls.length);
+
+    // New rows on the copy come after the copied ones: the insertion-order sequences moved past the copied values.
+    const headers = { Cookie: cookies.get('engineer')!, Origin: ORIGIN, 'Content-Type': 'application/json' };
+    const created = await fetch(`${base}/api/jobs`, { method: 'POST', headers, body: JSON.stringify({ name: 'First job on PostgreSQL', customer: 'Test customer', application: 'Test pipework' }) });
+    expect(created.status).toBe(201);
+    const jobId = ((await created.json()) as { job: { id: string } }).job.id;
+    const pg = new Client({ connectionString: target.url });
+    await pg.connect();
+    try {
+      const { rows } = await pg.query('SELECT (SELECT MIN(rowid) FROM activity WHERE subject_id = $1) AS new_row, (SELECT MAX(rowid) FROM activity WHERE subject_id <> $1) AS copied', [jobId]);
+      expect(Number(rows[0].new_row)).toBeGreaterThan(Number(rows[0].copied));
+    } finally {
+      await pg.end();
+    }
   });
 });
