@@ -30,6 +30,7 @@ export interface MigrationDatabase {
   /** Moves generated-number columns (PostgreSQL's `rowid` sequences) past the copied values. */
   resetSequences(table: string): Promise<void>;
   migrationNames(): Promise<string[]>;
+  /** A transaction; on a source, one consistent snapshot for all tables. */
   begin(): Promise<void>;
   commit(): Promise<void>;
   rollback(): Promise<void>;
@@ -173,7 +174,8 @@ export async function openPostgres(url: string): Promise<MigrationDatabase> {
       const found = await q("SELECT 1 FROM information_schema.tables WHERE table_schema = current_schema() AND table_name = $1", [MIGRATIONS_TABLE]);
       return found.length ? (await q<{ name: string }>(`SELECT name FROM ${quote(MIGRATIONS_TABLE)} ORDER BY name COLLATE "C"`)).map((r) => r.name) : [];
     },
-    begin: async () => void (await client.query('BEGIN')),
+    // Repeatable read: as a source, every table is read from one snapshot.
+    begin: async () => void (await client.query('BEGIN ISOLATION LEVEL REPEATABLE READ')),
     commit: async () => void (await client.query('COMMIT')),
     rollback: async () => void (await client.query('ROLLBACK')),
     close: () => client.end(),

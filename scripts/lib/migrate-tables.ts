@@ -95,6 +95,7 @@ export async function copyTables(source: MigrationDatabase, target: MigrationDat
   if (onlyOneSide.length) throw new Error(`the databases have different tables: ${onlyOneSide.join(', ')}`);
   const order = await dependencyOrder(target, targetTables);
   const reports: TableReport[] = [];
+  await source.begin();
   await target.begin();
   try {
     for (const table of order) {
@@ -113,6 +114,8 @@ export async function copyTables(source: MigrationDatabase, target: MigrationDat
   } catch (err) {
     await target.rollback();
     throw err;
+  } finally {
+    await source.rollback();
   }
   return reports;
 }
