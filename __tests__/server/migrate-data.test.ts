@@ -105,7 +105,7 @@ function getUrls(t: TestApp, fixtures: RouteFixtures): string[] {
     const args = ['--from', `sqlite:${t.databaseUrl}`, '--to', target.url, '--from-uploads', t.uploadsDir, '--to-uploads', path.join(dataDir, 'uploads')];
     const started = Date.now();
     const first = await migrateData(args);
-    console.log(`[migrate-data] demo data plus fixtures, SQLite → PostgreSQL in ${Date.now() - started} ms (process start included)\n${first.stdout}`);
+    console.log(`[migrate-data] demo data plus fixtures, SQLite → PostgreSQL in ${Date.now() - started} ms (process start included)\n${first.stdout.split('\n').filter((l) => l.startsWith('[')).join('\n')}`);
     expect(first.stderr).toBe('');
     expect(first.status).toBe(0);
     expect(first.stdout).toMatch(/1 data-sheet files \(\d+ bytes\) copied/);
