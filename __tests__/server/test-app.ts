@@ -19,13 +19,15 @@ export const ORIGIN = `http://${HOST}`;
 export interface TestApp {
   app: ReturnType<typeof createApp>;
   dataSource: DataSource;
+  /** The database's URL or path (a file only when `reopenable`). */
+  databaseUrl: string;
   uploadsDir: string;
   /** The fake payment provider the app's SDK talks to; its webhooks reach the app through supertest. */
   payments: FakeProvider;
   close: () => Promise<void>;
 }
 
-type TestOptions = Partial<AppOptions> & { demo?: boolean; catalogue?: boolean };
+type TestOptions = Partial<AppOptions> & { demo?: boolean; catalogue?: boolean; reopenable?: boolean };
 
 /**
  * A real app on a real database (in-memory SQLite, or a fresh PostgreSQL database when the suite runs
@@ -33,7 +35,7 @@ type TestOptions = Partial<AppOptions> & { demo?: boolean; catalogue?: boolean }
  * (reference catalogue and demo shop), with its own uploads folder.
  */
 export async function createTestApp(options: TestOptions = {}): Promise<TestApp> {
-  const database = await openTestDatabase({ seed: { demo: options.demo ?? true, catalogue: options.catalogue ?? true } });
+  const database = await openTestDatabase({ reopenable: options.reopenable, seed: { demo: options.demo ?? true, catalogue: options.catalogue ?? true } });
   const dataSource = database.dataSource;
   const uploadsDir = options.uploadsDir ?? fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-uploads-'));
   const smtp = await startFakeSmtp(new OutboxRepository(dataSource));
@@ -51,6 +53,7 @@ export async function createTestApp(options: TestOptions = {}): Promise<TestApp>
   return {
     app,
     dataSource,
+    databaseUrl: database.url,
     uploadsDir,
     payments,
     close: async () => {
