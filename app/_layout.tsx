@@ -9,6 +9,8 @@ import { SourceSans3_400Regular } from '@expo-google-fonts/source-sans-3/400Regu
 import { SourceSans3_600SemiBold } from '@expo-google-fonts/source-sans-3/600SemiBold';
 import { SourceSans3_700Bold } from '@expo-google-fonts/source-sans-3/700Bold';
 import { LoadingState } from '../components/ui/loading-state';
+// Read before the router settles the address of a nested screen.
+import '../components/auth/opened-url';
 import { isApiError, shouldRetry } from '../hooks/api-client';
 import { sessionKeys } from '../hooks/use-session';
 

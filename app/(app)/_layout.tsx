@@ -1,5 +1,7 @@
 import { Redirect, Slot, usePathname } from 'expo-router';
+import { useState } from 'react';
 import { Platform } from 'react-native';
+import { takeOpenedUrl } from '../../components/auth/opened-url';
 import { signInHref } from '../../components/auth/next-path';
 import { AppShell } from '../../components/nav/app-shell';
 import { ErrorBanner } from '../../components/ui/error-banner';
@@ -12,6 +14,9 @@ export default function AppLayout() {
   const session = useSessionQuery();
   const signOut = useSignOutMutation();
   const pathname = usePathname();
+  // The address the app was opened at, used only if the first thing this layout does is ask for sign-in.
+  const [firstUrl, setFirstUrl] = useState(takeOpenedUrl);
+  if (session.data && firstUrl) setFirstUrl(null);
 
   if (session.isPending) return <LoadingState label="Checking your session…" />;
   if (session.isError) {
@@ -26,7 +31,7 @@ export default function AppLayout() {
     );
   }
   // A link opened while signed out comes back after sign-in (sign-out goes home, not back).
-  if (!session.data) return <Redirect href={!signOut.isIdle ? '/sign-in' : signInHref(openedPath(pathname))} />;
+  if (!session.data) return <Redirect href={!signOut.isIdle ? '/sign-in' : signInHref(firstUrl ?? openedPath(pathname))} />;
 
   return (
     <AppShell
