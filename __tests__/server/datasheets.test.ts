@@ -6,6 +6,8 @@ import path from 'node:path';
 import { Datasheet } from '../../server/catalogue/catalogue.entities';
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import { ROLES } from '../../shared/schemas/auth';
+import { createApp } from '../../server/app';
+import { Mailer } from '../../server/mail/mailer';
 import { openObjectStore } from '../../server/storage/object-store';
 import { startS3Fake, type S3Fake } from './storage-fake';
 import { client, createTestApp, expectErrorShape, HOST, ORIGIN, signedIn, type TestApp } from './test-app';
@@ -235,6 +237,27 @@ describe.each(['folder', 's3'] as const)('data sheets kept in the %s store', (ki
       const download = await eng.get(`/api/datasheets/${up.body.datasheet.id}`).buffer(true);
       expect(download.headers['content-type']).toBe('application/pdf');
       expect(download.headers['content-disposition'].replace(/"/g, '')).toBe('attachment; filename=oldlmth.pdf');
+    });
+  });
+
+  describe('when storage fails', () => {
+    it('when the store cannot be written (no such bucket; the folder is under a plain file), then 503 in the error shape and no row', async () => {
+      const blocker = path.join(t.uploadsDir, 'not-a-folder');
+      fs.writeFileSync(blocker, '');
+      const unwritable = fake ? openObjectStore({ ...fake.config(prefix), bucket: 'no-such-bucket' }) : openObjectStore({ kind: 'folder', dir: path.join(blocker, 'uploads') });
+      // A second app on the same database, keeping its files where nothing can be written.
+      const mailer = new Mailer('smtp://127.0.0.1:9');
+      const broken = createApp(t.dataSource, { uploadsDir: t.uploadsDir, objectStore: unwritable, mailer });
+      try {
+        const eng = await signedIn(broken, 'engineer');
+        const res = await eng.post(`/api/alloys/${await alloyId()}/datasheets`).attach('file', PDF, { filename: 'a.pdf' });
+        expect(res.status).toBe(503);
+        expectErrorShape(res.body, 'storage_unavailable');
+        expect(await datasheetRows()).toBe(0);
+      } finally {
+        unwritable.close();
+        mailer.close();
+      }
     });
   });
 

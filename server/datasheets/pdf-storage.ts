@@ -51,6 +51,10 @@ function notPdf() {
   return new AppError(415, 'not_a_pdf', 'Only PDF data sheets can be uploaded; this file is not a PDF.', { file: 'Not a PDF file' });
 }
 
+function storageUnavailable() {
+  return new AppError(503, 'storage_unavailable', 'The data sheet could not be stored just now; try again later.');
+}
+
 export function tooLarge() {
   return new AppError(413, 'too_large', 'A data sheet may be at most 25 MB.', { file: 'Larger than 25 MB' });
 }
@@ -64,16 +68,32 @@ export function pdfStorage(store: ObjectStore, maxBytes = MAX_DATASHEET_BYTES): 
     _handleFile(_req: Request, file, cb) {
       const storedName = `${randomBytes(16).toString('hex')}.pdf`;
       const gate = new PdfGate(maxBytes);
-      const reading = pipeline(file.stream, gate);
-      const writing = store.put(storedName, gate);
+      let readFailed = false;
+      let storeFailedFirst = false;
+      const reading = pipeline(file.stream, gate).catch((err: unknown) => {
+        readFailed = true;
+        throw err;
+      });
+      const writing = store.put(storedName, gate).catch((err: unknown) => {
+        storeFailedFirst = !readFailed;
+        // Unread, the gate would hold the request stream still for ever. No error passed: once the
+        // request has been read through, nothing listens for one on the gate any more.
+        gate.destroy();
+        throw err;
+      });
       Promise.allSettled([reading, writing]).then(async ([read, write]) => {
         if (read.status === 'fulfilled' && write.status === 'fulfilled') {
           return cb(null, { storedName, sizeBytes: gate.bytesSeen, sha256: gate.hash.digest('hex') } as StoredFile & Partial<Express.Multer.File>);
         }
-        // The gate's own refusal (not a PDF, too large) says more than the store's report of the broken stream.
-        const err = read.status === 'rejected' ? read.reason : (write as PromiseRejectedResult).reason;
         await store.remove(storedName).catch(() => undefined);
-        cb(err);
+        // The gate's own refusal (not a PDF, too large) says more than the store's report of the broken stream.
+        const refusal = [read, write].find((r): r is PromiseRejectedResult => r.status === 'rejected' && r.reason instanceof AppError);
+        if (refusal) return cb(refusal.reason);
+        if (storeFailedFirst) {
+          console.error('[dilato] could not store a data sheet:', (write as PromiseRejectedResult).reason);
+          return cb(storageUnavailable());
+        }
+        cb(read.status === 'rejected' ? read.reason : (write as PromiseRejectedResult).reason);
       });
     },
     _removeFile(_req, file, cb) {
