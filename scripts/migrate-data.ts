@@ -1,5 +1,6 @@
 /**
  * npm run migrate-data -- --from sqlite:./data/dilato.sqlite --to postgres://… [--from-uploads DIR] [--to-uploads DIR]
+ * Without --to-uploads, data sheets go to the bucket STORAGE_URL names (with the usual endpoint, region and key variables).
  *
  * Moves a shop from one Dilato database to another: makes the target's schema with the product's
  * migrations, copies every row of every table in foreign-key order in one transaction, checks row
@@ -9,7 +10,9 @@
 import path from 'node:path';
 import { openMigrationDatabase, sqlitePath, type MigrationDatabase } from './lib/migrate-databases';
 import { copyTables, nonEmptyTables } from './lib/migrate-tables';
-import { copyUploads, folderStore } from './lib/migrate-uploads';
+import { loadConfig } from '../server/config';
+import { openObjectStore } from '../server/storage/object-store';
+import { copyUploads, folderStore, objectStoreFiles, type FileStore } from './lib/migrate-uploads';
 
 const USAGE = 'usage: npm run migrate-data -- --from sqlite:PATH|postgres://… --to postgres://…|sqlite:PATH [--from-uploads DIR] [--to-uploads DIR]';
 
@@ -58,6 +61,14 @@ function productMigrationNames(): string[] {
   return MIGRATIONS.map((M) => new M().name).sort();
 }
 
+/** Where the data sheets go: --to-uploads DIR, else the bucket STORAGE_URL names, else nowhere (refused if there are any). */
+function targetFiles(options: Options): FileStore | null {
+  if (options.toUploads) return folderStore(options.toUploads);
+  if (!process.env.STORAGE_URL) return null;
+  const storage = loadConfig(process.env).storage;
+  return objectStoreFiles(openObjectStore(storage), process.env.STORAGE_URL);
+}
+
 async function checkBeforeWriting(source: MigrationDatabase, target: MigrationDatabase, options: Options): Promise<void> {
   const full = await nonEmptyTables(target);
   if (full.length) throw new Refused(`the target database ${describe(options.to)} is not empty (rows in ${full.join(', ')}); migrate-data only writes into an empty database`);
@@ -67,10 +78,11 @@ async function checkBeforeWriting(source: MigrationDatabase, target: MigrationDa
     throw new Refused(`the source database is not at this version's schema (${applied.length} of ${expected.length} migrations applied); start this version of Dilato on it once, then migrate`);
   }
   const files = await folderStore(options.fromUploads).list();
-  if (!options.toUploads && files.length) throw new Refused(`the source holds ${files.length} data-sheet files in ${options.fromUploads}; name where they go with --to-uploads DIR`);
-  if (options.toUploads) {
-    const there = await folderStore(options.toUploads).list();
-    if (there.length) throw new Refused(`the target uploads folder ${options.toUploads} is not empty (${there.length} files)`);
+  const to = targetFiles(options);
+  if (!to && files.length) throw new Refused(`the source holds ${files.length} data-sheet files in ${options.fromUploads}; name where they go with --to-uploads DIR or STORAGE_URL`);
+  if (to) {
+    const there = await to.list();
+    if (there.length) throw new Refused(`the target uploads ${to.describe} are not empty (${there.length} files)`);
   }
 }
 
@@ -99,9 +111,10 @@ async function main(): Promise<void> {
   } finally {
     await source.close();
   }
-  if (options.toUploads) {
-    const files = await copyUploads(folderStore(options.fromUploads), folderStore(options.toUploads));
-    console.log(`[migrate-data] ${files.files} data-sheet files (${files.bytes} bytes) copied to ${options.toUploads}; sha256 agree`);
+  const to = targetFiles(options);
+  if (to) {
+    const files = await copyUploads(folderStore(options.fromUploads), to);
+    console.log(`[migrate-data] ${files.files} data-sheet files (${files.bytes} bytes) copied to ${to.describe}; sha256 agree`);
   }
   console.log(`[migrate-data] done in ${((Date.now() - started) / 1000).toFixed(1)} s`);
 }

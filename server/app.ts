@@ -30,6 +30,8 @@ import { ImportJobs } from './catalogue/csv-import/import-jobs';
 import { ImportJobRepository } from './catalogue/csv-import/import-job.repository';
 import { datasheetsRouter } from './datasheets/datasheets.router';
 import { DatasheetsService } from './datasheets/datasheets.service';
+import { FolderObjectStore } from './storage/folder-object-store';
+import type { ObjectStore } from './storage/object-store';
 import { FlexPartsRepository } from './flex-parts/flex-parts.repository';
 import { flexPartsRouter } from './flex-parts/flex-parts.router';
 import { FlexPartsService } from './flex-parts/flex-parts.service';
@@ -62,8 +64,10 @@ import { weldPlanRouter, weldRulesRouter } from './welds/weld-rules.router';
 import { WeldRulesService } from './welds/weld-rules.service';
 
 export interface AppOptions {
-  /** Where uploaded data sheets are kept. */
+  /** The uploads folder, where data sheets are kept unless objectStore says otherwise. */
   uploadsDir: string;
+  /** Where data sheets are kept (see `openObjectStore`); absent means the uploads folder. */
+  objectStore?: ObjectStore;
   /** Sends quotes and notifications (the embedded fake SMTP server by default). */
   mailer: Mailer;
   webDir?: string;
@@ -86,7 +90,8 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   const usersService = new UsersService(usersRepository, auth);
   const catalogueStore = new CatalogueStore(dataSource);
   const catalogueService = new CatalogueService(catalogueStore);
-  const datasheetsService = new DatasheetsService(catalogueStore, options.uploadsDir);
+  const objectStore = options.objectStore ?? new FolderObjectStore(options.uploadsDir);
+  const datasheetsService = new DatasheetsService(catalogueStore, objectStore);
   const flexPartsService = new FlexPartsService(new FlexPartsRepository(dataSource));
 
   const app = express();
@@ -132,7 +137,7 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.use('/users', usersRouter(usersService));
   api.use('/calc', calcRouter(new CalcService(catalogueService, flexPartsService, shopSettings)));
   api.use('/flex-parts', flexPartsRouter(flexPartsService));
-  api.use(datasheetsRouter(datasheetsService, options.uploadsDir));
+  api.use(datasheetsRouter(datasheetsService, objectStore));
   const currencyRates = new CurrencyRatesService(new CurrencyRatesRepository(dataSource), shopSettings);
   const jobsService = new JobsService(new JobsStore(dataSource), new RunResults(catalogueService, flexPartsService, shopSettings, currencyRates));
   const weldRules = new WeldRulesService(new WeldRulesStore(dataSource));

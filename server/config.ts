@@ -50,6 +50,16 @@ const envSchema = z.object({
   PAYMENTS_SECRET_KEY: z.string().regex(/^(sk|rk)_/, { error: 'must be the provider’s secret key (sk_… or rk_…)' }).optional(),
   PAYMENTS_WEBHOOK_SECRET: z.string().regex(/^whsec_/, { error: 'must be the webhook signing secret (whsec_…)' }).optional(),
   PAYMENTS_API_URL: z.url({ protocol: /^https?$/, error: 'must be an http:// or https:// URL' }).optional(),
+  STORAGE_URL: z
+    .string()
+    .regex(/^s3:\/\/[a-z0-9][a-z0-9.-]{1,61}[a-z0-9](\/.*)?$/, { error: 'must be s3://bucket or s3://bucket/prefix (leave it unset for the uploads folder in DATA_DIR)' })
+    .optional(),
+  STORAGE_ENDPOINT: z.url({ protocol: /^https?$/, error: 'must be an http:// or https:// URL' }).optional(),
+  AWS_ENDPOINT_URL: z.url({ protocol: /^https?$/, error: 'must be an http:// or https:// URL' }).optional(),
+  AWS_REGION: z.string().min(1).default('us-east-1'),
+  AWS_ACCESS_KEY_ID: z.string().min(1).optional(),
+  AWS_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  STORAGE_PATH_STYLE: booleanFlag.optional(),
 });
 
 export interface Config {
@@ -59,6 +69,7 @@ export interface Config {
   databasePath: string;
   onPostgres: boolean;
   uploadsDir: string;
+  storage: StorageConfig;
   webDir: string;
   seedDemo: boolean;
   seedCatalogue: boolean;
@@ -67,6 +78,23 @@ export interface Config {
   trustProxy: TrustProxy;
   /** The payment provider; absent means the embedded fake provider. */
   payments?: PaymentsConfig;
+}
+
+/** Where data sheets are kept: the uploads folder, or an S3-compatible bucket when STORAGE_URL is set. */
+export type StorageConfig = { kind: 'folder'; dir: string } | S3StorageConfig;
+
+export interface S3StorageConfig {
+  kind: 's3';
+  bucket: string;
+  /** Put before every key: empty, or ending in "/". */
+  prefix: string;
+  region: string;
+  /** An S3-compatible server's address; absent means AWS itself. */
+  endpoint?: string;
+  /** bucket in the path (http://host/bucket/key), as most self-hosted S3-compatible servers want. */
+  forcePathStyle: boolean;
+  /** Absent means the SDK's own credential chain (instance role, shared profile…). */
+  credentials?: { accessKeyId: string; secretAccessKey: string };
 }
 
 export interface PaymentsConfig {
@@ -95,13 +123,20 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
       'Dilato cannot start: the environment has bad values\n  PAYMENTS_SECRET_KEY, PAYMENTS_WEBHOOK_SECRET: set both for a real payment provider, or neither for the embedded fake',
     );
   }
+  if ((e.AWS_ACCESS_KEY_ID === undefined) !== (e.AWS_SECRET_ACCESS_KEY === undefined)) {
+    throw new ConfigError(
+      'Dilato cannot start: the environment has bad values\n  AWS_ACCESS_KEY_ID, AWS_SECRET_ACCESS_KEY: set both, or neither to use the SDK\u2019s own credentials',
+    );
+  }
   const dataDir = path.resolve(e.DATA_DIR);
+  const uploadsDir = path.join(dataDir, 'uploads');
   return {
     port: e.PORT,
     dataDir,
     databasePath: e.DATABASE_URL ?? path.join(dataDir, 'dilato.sqlite'),
     onPostgres: e.DATABASE_URL !== undefined,
-    uploadsDir: path.join(dataDir, 'uploads'),
+    uploadsDir,
+    storage: e.STORAGE_URL ? s3Storage(e.STORAGE_URL, e) : { kind: 'folder', dir: uploadsDir },
     webDir: path.resolve(e.WEB_DIR ?? 'dist'),
     seedDemo: e.SEED_DEMO,
     seedCatalogue: e.SEED_CATALOGUE,
@@ -109,5 +144,20 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     publicUrl: e.PUBLIC_URL,
     trustProxy: e.TRUST_PROXY,
     payments: e.PAYMENTS_SECRET_KEY && e.PAYMENTS_WEBHOOK_SECRET ? { secretKey: e.PAYMENTS_SECRET_KEY, webhookSecret: e.PAYMENTS_WEBHOOK_SECRET, apiUrl: e.PAYMENTS_API_URL } : undefined,
+  };
+}
+
+function s3Storage(url: string, e: z.infer<typeof envSchema>): S3StorageConfig {
+  const [bucket, ...rest] = url.slice('s3://'.length).split('/');
+  const prefix = rest.filter(Boolean).join('/');
+  const endpoint = e.STORAGE_ENDPOINT ?? e.AWS_ENDPOINT_URL;
+  return {
+    kind: 's3',
+    bucket,
+    prefix: prefix ? `${prefix}/` : '',
+    region: e.AWS_REGION,
+    endpoint,
+    forcePathStyle: e.STORAGE_PATH_STYLE ?? endpoint !== undefined,
+    credentials: e.AWS_ACCESS_KEY_ID && e.AWS_SECRET_ACCESS_KEY ? { accessKeyId: e.AWS_ACCESS_KEY_ID, secretAccessKey: e.AWS_SECRET_ACCESS_KEY } : undefined,
   };
 }

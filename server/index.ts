@@ -11,11 +11,12 @@ import { Mailer } from './mail/mailer';
 import { OutboxRepository } from './mail/outbox.repository';
 import { startFakeProvider } from './payments/fake-provider';
 import { createPaymentsClient } from './payments/payments-client';
+import { openObjectStore } from './storage/object-store';
 
 async function main() {
   const startedAt = Date.now();
   const config = loadConfig();
-  fs.mkdirSync(config.uploadsDir, { recursive: true });
+  if (config.storage.kind === 'folder') fs.mkdirSync(config.storage.dir, { recursive: true });
 
   const dataSource = await openDatabase(config.databasePath);
   const report = await seed(dataSource, { demo: config.seedDemo, catalogue: config.seedCatalogue });
@@ -27,8 +28,10 @@ async function main() {
   const payments = config.payments
     ? { client: createPaymentsClient(config.payments.secretKey, config.payments.apiUrl), webhookSecret: config.payments.webhookSecret }
     : { client: createPaymentsClient(fakePayments!.secretKey, fakePayments!.url), webhookSecret: fakePayments!.webhookSecret };
+  const objectStore = openObjectStore(config.storage);
   const app = createApp(dataSource, {
     uploadsDir: config.uploadsDir,
+    objectStore,
     mailer,
     webDir: config.webDir,
     publicUrl: config.publicUrl,
@@ -39,7 +42,9 @@ async function main() {
   const server: Server = app.listen(config.port, () => {
     fakePayments?.setWebhookTarget(`http://127.0.0.1:${config.port}/api/payments/webhook`);
     console.log(
-      `[dilato] listening on http://localhost:${config.port} (data in ${config.dataDir}; ` +
+      `[dilato] listening on http://localhost:${config.port} (data in ${config.dataDir}` +
+        (config.storage.kind === 's3' ? `, data sheets in s3://${config.storage.bucket}/${config.storage.prefix}` : '') +
+        '; ' +
         `seeded: ${report.alloys} alloys, ${report.sources} sources, ${report.flexParts} flex parts, ${report.weldRules} weld rules, ${report.demoUsers} demo users, ${report.demoJobs ?? 0} demo jobs; ready in ${Date.now() - startedAt} ms)` +
         (fakePayments ? `; payments: the embedded fake provider at ${fakePayments.url}` : ''),
     );
@@ -53,6 +58,7 @@ async function main() {
     clearInterval(sweep);
     server.close(() => {
       mailer.close();
+      objectStore.close();
       void Promise.all([fakeSmtp?.close(), fakePayments?.close(), dataSource.destroy()]).finally(() => process.exit(0));
     });
   };

@@ -10,6 +10,8 @@ import { Mailer } from '../../server/mail/mailer';
 import { OutboxRepository } from '../../server/mail/outbox.repository';
 import { startFakeProvider, type FakeProvider } from '../../server/payments/fake-provider';
 import { createPaymentsClient } from '../../server/payments/payments-client';
+import { FolderObjectStore } from '../../server/storage/folder-object-store';
+import type { ObjectStore } from '../../server/storage/object-store';
 import type { Role } from '../../shared/schemas/auth';
 import { openTestDatabase } from './test-database';
 
@@ -22,6 +24,8 @@ export interface TestApp {
   /** The database's URL or path (a file only when `reopenable`). */
   databaseUrl: string;
   uploadsDir: string;
+  /** Where the app keeps data sheets: the uploads folder unless the test passed another store. */
+  objectStore: ObjectStore;
   /** The fake payment provider the app's SDK talks to; its webhooks reach the app through supertest. */
   payments: FakeProvider;
   close: () => Promise<void>;
@@ -41,9 +45,11 @@ export async function createTestApp(options: TestOptions = {}): Promise<TestApp>
   const smtp = await startFakeSmtp(new OutboxRepository(dataSource));
   const mailer = new Mailer(smtp.url);
   const payments = await startFakeProvider();
+  const objectStore = options.objectStore ?? new FolderObjectStore(uploadsDir);
   const app = createApp(dataSource, {
     ...options,
     uploadsDir,
+    objectStore,
     mailer: options.mailer ?? mailer,
     payments: { client: createPaymentsClient(payments.secretKey, payments.url), webhookSecret: payments.webhookSecret },
   });
@@ -55,9 +61,11 @@ export async function createTestApp(options: TestOptions = {}): Promise<TestApp>
     dataSource,
     databaseUrl: database.url,
     uploadsDir,
+    objectStore,
     payments,
     close: async () => {
       mailer.close();
+      objectStore.close();
       await payments.close();
       await smtp.close();
       await database.close();

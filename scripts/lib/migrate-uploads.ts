@@ -5,6 +5,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
+import type { ObjectStore } from '../../server/storage/object-store';
 
 export interface FileStore {
   /** Names of the stored files, sorted. */
@@ -27,6 +28,20 @@ export function folderStore(dir: string): FileStore {
       await pipeline(body, fs.createWriteStream(partial, { flags: 'wx' }));
       fs.renameSync(partial, path.join(dir, name));
     },
+  };
+}
+
+/** The product's own object store (an S3-compatible bucket under STORAGE_URL) as a copy target or source. */
+export function objectStoreFiles(store: ObjectStore, describe: string): FileStore {
+  return {
+    describe,
+    list: async () => (await store.list()).sort(),
+    get: async (name) => {
+      const found = await store.get(name);
+      if (!found) throw new Error(`data sheet ${name} is missing from ${describe}`);
+      return found.body;
+    },
+    put: (name, body) => store.put(name, body),
   };
 }
 

@@ -1,12 +1,12 @@
 import { randomUUID } from 'node:crypto';
-import fs from 'node:fs';
-import path from 'node:path';
+import type { Readable } from 'node:stream';
 import type { DatasheetView } from '../../shared/schemas/alloy';
 import { Datasheet, AlloyRevision } from '../catalogue/catalogue.entities';
 import type { CatalogueStore } from '../catalogue/catalogue.repository';
 import { canEdit, type Actor } from '../catalogue/catalogue.service';
 import { datasheetView } from '../catalogue/catalogue.views';
 import { AppError } from '../http/app-error';
+import type { ObjectStore } from '../storage/object-store';
 import type { StoredFile } from './pdf-storage';
 
 /**
@@ -24,7 +24,7 @@ export function cleanOriginalName(name: string): string {
 export class DatasheetsService {
   constructor(
     private readonly store: CatalogueStore,
-    private readonly uploadsDir: string,
+    private readonly files: ObjectStore,
   ) {}
 
   async attach(alloyId: string, file: StoredFile & { originalName: string }, actor: Actor): Promise<DatasheetView> {
@@ -60,7 +60,7 @@ export class DatasheetsService {
         return datasheetView(sheet);
       });
     } catch (err) {
-      this.discard(file.storedName);
+      await this.discard(file.storedName);
       throw err;
     }
   }
@@ -88,21 +88,21 @@ export class DatasheetsService {
       return sheet.storedName;
     });
     // After the commit: a failed delete leaves the file behind, never a row pointing at nothing.
-    this.discard(storedName);
+    await this.discard(storedName);
   }
 
-  discard(storedName: string) {
-    fs.rmSync(path.join(this.uploadsDir, storedName), { force: true });
+  private async discard(storedName: string) {
+    await this.files.remove(storedName).catch((err) => console.error(`[dilato] could not delete the data sheet file ${storedName}:`, err));
   }
 
   /** The file behind a download link: any signed-in person for a published alloy, editors for drafts. */
-  async forDownload(id: string, actor: Actor): Promise<{ path: string; originalName: string; sizeBytes: number }> {
+  async forDownload(id: string, actor: Actor): Promise<{ body: Readable; originalName: string; sizeBytes: number }> {
     const repo = this.store.read();
     const sheet = await repo.findDatasheet(id);
     const alloy = sheet ? await repo.findAlloy(sheet.alloyId) : null;
     if (!sheet || !alloy || (!alloy.publishedVersionId && !canEdit(actor))) throw AppError.notFound('There is no such data sheet.');
-    const file = path.join(this.uploadsDir, sheet.storedName);
-    if (!fs.existsSync(file)) throw AppError.notFound('The data sheet file is missing from storage.');
-    return { path: file, originalName: cleanOriginalName(sheet.originalName), sizeBytes: sheet.sizeBytes };
+    const file = await this.files.get(sheet.storedName);
+    if (!file) throw AppError.notFound('The data sheet file is missing from storage.');
+    return { body: file.body, originalName: cleanOriginalName(sheet.originalName), sizeBytes: file.sizeBytes };
   }
 }
