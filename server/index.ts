@@ -3,7 +3,7 @@ import type { Server } from 'node:http';
 import { createApp } from './app';
 import { ConfigError, loadConfig } from './config';
 import { answerClientErrors } from './http/request-guards';
-import { openDatabase } from './db/data-source';
+import { openDatabase, withStartUpLock } from './db/data-source';
 import { seed } from './seed/seed';
 import { clearExpiredCounters } from './db/shared-counters';
 import { startFakeSmtp } from './mail/fake-smtp';
@@ -19,7 +19,7 @@ async function main() {
   if (config.storage.kind === 'folder') fs.mkdirSync(config.storage.dir, { recursive: true });
 
   const dataSource = await openDatabase(config.databasePath);
-  const report = await seed(dataSource, { demo: config.seedDemo, catalogue: config.seedCatalogue });
+  const report = await withStartUpLock(dataSource, () => seed(dataSource, { demo: config.seedDemo, catalogue: config.seedCatalogue }));
   // Without SMTP_URL, e-mail goes to an SMTP server of our own that keeps it in the outbox.
   const fakeSmtp = config.smtpUrl ? null : await startFakeSmtp(new OutboxRepository(dataSource));
   const mailer = new Mailer(config.smtpUrl ?? fakeSmtp!.url);

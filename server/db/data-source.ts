@@ -133,13 +133,36 @@ export function createDataSource(database: string): DataSource {
 export async function openDatabase(database: string): Promise<DataSource> {
   const dataSource = createDataSource(database);
   await dataSource.initialize();
-  await dataSource.runMigrations({ transaction: 'each' });
+  await withStartUpLock(dataSource, () => dataSource.runMigrations({ transaction: 'each' }));
   // SQLite plans joins from table statistics it gathers only when asked; without them the alloy list scans the wide version rows.
   if (dataSource.options.type === 'better-sqlite3') await dataSource.query('PRAGMA optimize=0x10002');
   return dataSource;
 }
 
 export const isPostgres = (dataSource: DataSource) => dataSource.options.type === 'postgres';
+
+/** Any fixed number names the lock; every Dilato instance uses this one. */
+const START_UP_LOCK = 0xd11a70;
+
+/**
+ * Runs start-up work (migrations, seeds) while holding a PostgreSQL advisory lock on a connection of its
+ * own, so instances started together migrate and seed one after the other. SQLite serves one process.
+ */
+export async function withStartUpLock<T>(dataSource: DataSource, work: () => Promise<T>): Promise<T> {
+  if (!isPostgres(dataSource)) return work();
+  const lock = dataSource.createQueryRunner();
+  await lock.connect();
+  try {
+    await lock.query('SELECT pg_advisory_lock($1)', [START_UP_LOCK]);
+    try {
+      return await work();
+    } finally {
+      await lock.query('SELECT pg_advisory_unlock($1)', [START_UP_LOCK]);
+    }
+  } finally {
+    await lock.release();
+  }
+}
 
 /** The raw better-sqlite3 handle under TypeORM, shared with lucia's SQLite session adapter. */
 export function rawDatabase(dataSource: DataSource): import('better-sqlite3').Database {
