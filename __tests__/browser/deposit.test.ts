@@ -1,5 +1,6 @@
 import type { Browser, BrowserContext } from 'playwright-core';
 import { BASE_URL, launchBrowser, newPage, pageErrors, PHONE, screenshot, signIn } from './browser';
+import { draftQuote, tokenMailedTo } from './quote-fixtures';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -7,35 +8,15 @@ beforeAll(async () => {
 });
 afterAll(() => browser.close());
 
-const TOKEN_IN_TEXT = /\/q\/([A-Za-z0-9_-]{20,})/;
-const inDays = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
-
 /** A two-option quote sent through the API as sales; answers its id, number and the customer's token. */
 async function sentQuote(context: BrowserContext, email: string) {
   const api = context.request;
-  const headers = { Origin: BASE_URL };
-  const jobs = (await (await api.get('/api/jobs')).json()).items as { id: string; name: string }[];
-  const alloys = (await (await api.get('/api/alloys')).json()).items as { id: string; uns: string }[];
-  const alloy = (uns: string) => alloys.find((a) => a.uns === uns)!.id;
-  const created = await api.post('/api/quotes', {
-    headers,
-    data: {
-      jobId: jobs.find((j) => j.name === 'Road car downpipe')!.id,
-      customerName: 'Sable Okonjo',
-      customerEmail: email,
-      validUntil: inDays(30),
-      options: [
-        { label: 'Type 321 throughout', alloyId: alloy('S32100') },
-        { label: 'Type 304 throughout', alloyId: alloy('S30400') },
-      ],
-    },
-  });
-  expect(created.status()).toBe(201);
-  const quote = (await created.json()).quote as { id: string; number: string };
-  expect((await api.post(`/api/quotes/${quote.id}/send`, { headers, data: {} })).status()).toBe(200);
-  const outbox = (await (await api.get('/api/outbox')).json()).items as { to: string; text: string }[];
-  const token = TOKEN_IN_TEXT.exec(outbox.find((m) => m.to.includes(email))!.text)![1];
-  return { ...quote, token };
+  const quote = await draftQuote(api, { name: 'Sable Okonjo', email }, [
+    ['Type 321 throughout', 'S32100'],
+    ['Type 304 throughout', 'S30400'],
+  ]);
+  expect((await api.post(`/api/quotes/${quote.id}/send`, { headers: { Origin: BASE_URL }, data: {} })).status()).toBe(200);
+  return { ...quote, token: await tokenMailedTo(api, email) };
 }
 
 async function acceptOnPhone(token: string, number: string) {

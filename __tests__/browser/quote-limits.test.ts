@@ -1,5 +1,6 @@
 import type { APIRequestContext, Browser } from 'playwright-core';
-import { BASE_URL, launchBrowser, newPage, pageErrors, PHONE, screenshot, signIn } from './browser';
+import { launchBrowser, newPage, pageErrors, PHONE, screenshot, signIn } from './browser';
+import { draftQuote, tokenMailedTo } from './quote-fixtures';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -7,31 +8,12 @@ beforeAll(async () => {
 });
 afterAll(() => browser.close());
 
-const headers = { Origin: BASE_URL };
-const TOKEN_IN_TEXT = /\/q\/([A-Za-z0-9_-]{20,})/;
-const inDays = (days: number) => new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
-
 /** A draft with a titanium option on the road car downpipe: 780 °C at its hottest, Ti-6Al-4V is seeded at 400 °C. */
-async function titaniumDraft(api: APIRequestContext, email: string): Promise<{ id: string; number: string }> {
-  const jobs = (await (await api.get('/api/jobs')).json()).items as { id: string; name: string }[];
-  const alloys = (await (await api.get('/api/alloys')).json()).items as { id: string; uns: string }[];
-  const alloy = (uns: string) => alloys.find((a) => a.uns === uns)!.id;
-  const created = await api.post('/api/quotes', {
-    headers,
-    data: {
-      jobId: jobs.find((j) => j.name === 'Road car downpipe')!.id,
-      customerName: 'Ada Brennan',
-      customerEmail: email,
-      validUntil: inDays(30),
-      options: [
-        { label: 'Type 321 throughout', alloyId: alloy('S32100') },
-        { label: 'Titanium throughout', alloyId: alloy('R56400') },
-      ],
-    },
-  });
-  expect(created.status()).toBe(201);
-  return (await created.json()).quote;
-}
+const titaniumDraft = (api: APIRequestContext, email: string) =>
+  draftQuote(api, { name: 'Ada Brennan', email }, [
+    ['Type 321 throughout', 'S32100'],
+    ['Titanium throughout', 'R56400'],
+  ]);
 
 describe('an option over its temperature limit, at 390 px', () => {
   it('when sales tries to send it, then it is refused until an engineer records an override; the customer then reads the caution and can accept', async () => {
@@ -72,8 +54,7 @@ describe('an option over its temperature limit, at 390 px', () => {
     await sales.page.getByRole('button', { name: 'Send quote' }).click();
     await sales.page.getByRole('button', { name: 'Yes, send it' }).click();
     await sales.page.getByText('Sent', { exact: true }).first().waitFor();
-    const outbox = (await (await sales.context.request.get('/api/outbox')).json()).items as { to: string; text: string }[];
-    const token = TOKEN_IN_TEXT.exec(outbox.find((m) => m.to.includes(email))!.text)![1];
+    const token = await tokenMailedTo(sales.context.request, email);
     expect(pageErrors(sales.page)).toEqual([]);
     await sales.context.close();
 

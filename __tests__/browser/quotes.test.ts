@@ -2,6 +2,7 @@ import path from 'node:path';
 import Database from 'better-sqlite3';
 import type { Browser, Page } from 'playwright-core';
 import { BASE_URL, DESKTOP, launchBrowser, newPage, pageErrors, PHONE, screenshot, signIn } from './browser';
+import { TOKEN_IN_TEXT } from './quote-fixtures';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -9,7 +10,6 @@ beforeAll(async () => {
 });
 afterAll(() => browser.close());
 
-const TOKEN_IN_TEXT = /\/q\/([A-Za-z0-9_-]{20,})/;
 
 async function chooseAlloy(page: Page, option: number, name: RegExp) {
   await page.getByRole('button', { name: `Alloy for option ${option}`, exact: true }).click();
