@@ -21,12 +21,13 @@ async function main() {
   const server = startServer({ PORT: String(port), DATA_DIR: dataDir, SEED_DEMO: 'true' }, ['ignore', 'inherit', 'inherit']);
   let status = 1;
   try {
-    await waitForHealth(baseUrl, server);
+    console.log(`[browser] the server answered after ${await waitForHealth(baseUrl, server)} ms`);
     const jest = spawnSync(
       path.join(root, 'node_modules', '.bin', 'jest'),
       ['-c', 'jest.browser.config.js', '--runInBand', ...process.argv.slice(2)],
       // DILATO_DATA_DIR lets a test set up what no API offers (e.g. backdating a quote to test expiry).
-      { cwd: root, stdio: 'inherit', env: { ...process.env, DILATO_BASE_URL: baseUrl, DILATO_DATA_DIR: dataDir } },
+      // The timeout ends a hung run well inside CI's limit instead of holding it to the end.
+      { cwd: root, stdio: 'inherit', timeout: 20 * 60_000, env: { ...process.env, DILATO_BASE_URL: baseUrl, DILATO_DATA_DIR: dataDir } },
     );
     status = jest.status ?? 1;
   } finally {

@@ -74,7 +74,7 @@ async function main() {
   try {
     for (let round = 1; round <= ROUNDS; round += 1) {
       const server = startServer(env, ['ignore', 'ignore', 'inherit']);
-      await waitForHealth(base, server);
+      console.log(`[crash] round ${round}: the server answered after ${await waitForHealth(base, server)} ms`);
       const cookies = await Promise.all(ACCOUNTS.map((email) => signIn(base, email)));
       const call0 = api(base, cookies[0]);
       const alloyId = (await call0('GET', '/alloys?search=S32100')).body.items[0].id;

@@ -5,12 +5,21 @@ const { spawn } = require('node:child_process');
 
 const root = path.resolve(__dirname, '..');
 
+// A server left running after its script ends keeps the test run's output open, and the run never ends.
+const running = new Set();
+process.on('exit', () => {
+  for (const server of running) server.kill('SIGKILL');
+});
+
 function startServer(env = {}, stdio = 'inherit') {
-  return spawn(process.execPath, ['-r', '@swc-node/register', path.join(root, 'server', 'index.ts')], {
+  const server = spawn(process.execPath, ['-r', '@swc-node/register', path.join(root, 'server', 'index.ts')], {
     cwd: root,
     stdio,
     env: { ...process.env, SWC_NODE_PROJECT: path.join(root, 'server', 'tsconfig.json'), ...env },
   });
+  running.add(server);
+  server.once('exit', () => running.delete(server));
+  return server;
 }
 
 function freePort() {
@@ -24,19 +33,23 @@ function freePort() {
   });
 }
 
-async function waitForHealth(url, server, timeoutMs = 30_000) {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    if (server.exitCode !== null) throw new Error(`the server exited with code ${server.exitCode}`);
+// Generous: on a two-core machine the server may start while the PostgreSQL suite holds both cores.
+async function waitForHealth(url, server, timeoutMs = 120_000) {
+  const started = Date.now();
+  let last = 'no answer';
+  while (Date.now() - started < timeoutMs) {
+    if (server.exitCode !== null || server.signalCode !== null) throw new Error(`the server exited (${server.exitCode ?? server.signalCode}) before it answered`);
     try {
-      const res = await fetch(`${url}/api/health`);
-      if (res.ok) return;
-    } catch {
-      // not listening yet
+      const res = await fetch(`${url}/api/health`, { signal: AbortSignal.timeout(5_000) });
+      if (res.ok) return Date.now() - started;
+      last = `status ${res.status}`;
+    } catch (err) {
+      last = err.name === 'TimeoutError' ? 'no answer within 5 s' : 'not listening';
     }
     await new Promise((r) => setTimeout(r, 200));
   }
-  throw new Error(`the server did not answer ${url}/api/health within ${timeoutMs} ms`);
+  server.kill('SIGKILL');
+  throw new Error(`the server did not answer ${url}/api/health within ${timeoutMs} ms (last try: ${last})`);
 }
 
 module.exports = { startServer, freePort, waitForHealth };

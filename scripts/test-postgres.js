@@ -20,6 +20,7 @@ async function main() {
       cwd: root,
       env,
       stdio: 'inherit',
+      timeout: 20 * 60_000, // a hung run ends well inside CI's limit
     });
     console.log(`[test:postgres] server suite on PostgreSQL: ${((Date.now() - started) / 1000).toFixed(1)} s`);
     status = jest.status ?? 1;
