@@ -5,7 +5,7 @@ const os = require('node:os');
 const path = require('node:path');
 const { spawnSync } = require('node:child_process');
 const { ensureWebBuild } = require('./web-build');
-const { freePort, startServer, waitForHealth } = require('./server-process');
+const { startOnFreePort, waitForHealth } = require('./server-process');
 
 const root = path.resolve(__dirname, '..');
 
@@ -15,13 +15,15 @@ async function main() {
     process.exit(1);
   }
   ensureWebBuild();
-  const port = await freePort();
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-browser-'));
-  const baseUrl = `http://localhost:${port}`;
-  const server = startServer({ PORT: String(port), DATA_DIR: dataDir, SEED_DEMO: 'true' }, ['ignore', 'inherit', 'inherit']);
+  const started = Date.now();
+  const { server, listening } = startOnFreePort({ DATA_DIR: dataDir, SEED_DEMO: 'true' }, { showOutput: true });
   let status = 1;
   try {
-    console.log(`[browser] the server answered after ${await waitForHealth(baseUrl, server)} ms`);
+    // Pages are opened at localhost, the name a person types; the API's same-origin check follows the Host.
+    const baseUrl = (await listening).replace('127.0.0.1', 'localhost');
+    await waitForHealth(baseUrl, server);
+    console.log(`[browser] the server answered after ${Date.now() - started} ms`);
     const jest = spawnSync(
       path.join(root, 'node_modules', '.bin', 'jest'),
       ['-c', 'jest.browser.config.js', '--runInBand', ...process.argv.slice(2)],

@@ -5,7 +5,7 @@ const fs = require('node:fs');
 const os = require('node:os');
 const path = require('node:path');
 const Database = require('better-sqlite3');
-const { freePort, startServer, waitForHealth } = require('./server-process');
+const { startOnFreePort, waitForHealth } = require('./server-process');
 
 const ROUNDS = Number(process.env.CRASH_ROUNDS ?? 3);
 const WRITERS = 8;
@@ -66,15 +66,16 @@ const exited = (server) =>
 
 async function main() {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-crash-'));
-  const port = await freePort();
-  const base = `http://127.0.0.1:${port}`;
-  const env = { PORT: String(port), DATA_DIR: dataDir, SEED_DEMO: 'true', WEB_DIR: path.join(dataDir, 'no-web') };
+  const env = { DATA_DIR: dataDir, SEED_DEMO: 'true', WEB_DIR: path.join(dataDir, 'no-web') };
   const acked = { jobs: new Map(), runs: new Map(), dead: false };
   let problems = 0;
   try {
     for (let round = 1; round <= ROUNDS; round += 1) {
-      const server = startServer(env, ['ignore', 'ignore', 'inherit']);
-      console.log(`[crash] round ${round}: the server answered after ${await waitForHealth(base, server)} ms`);
+      const started = Date.now();
+      const { server, listening } = startOnFreePort(env);
+      const base = await listening;
+      await waitForHealth(base, server);
+      console.log(`[crash] round ${round}: the server answered after ${Date.now() - started} ms`);
       const cookies = await Promise.all(ACCOUNTS.map((email) => signIn(base, email)));
       const call0 = api(base, cookies[0]);
       const alloyId = (await call0('GET', '/alloys?search=S32100')).body.items[0].id;
@@ -88,7 +89,8 @@ async function main() {
       console.log(`[crash] round ${round}: SIGKILL with ${WRITERS} writers; ${acked.jobs.size} jobs and ${acked.runs.size} runs acknowledged so far`);
     }
 
-    const server = startServer(env, ['ignore', 'ignore', 'inherit']);
+    const { server, listening } = startOnFreePort(env);
+    const base = await listening;
     await waitForHealth(base, server);
     const call = api(base, await signIn(base, ACCOUNTS[0]));
     let lost = 0;

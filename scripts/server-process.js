@@ -22,6 +22,39 @@ function startServer(env = {}, stdio = 'inherit') {
   return server;
 }
 
+/**
+ * Starts the server with PORT=0 and answers its base URL once it says where it listens. No port is
+ * picked beforehand, so nothing else starting at the same moment (a PostgreSQL cluster) can take it.
+ * `showOutput` copies the server's own lines to this process's output.
+ */
+function startOnFreePort(env = {}, { showOutput = false, timeoutMs = 120_000 } = {}) {
+  const server = startServer({ ...env, PORT: '0' }, ['ignore', 'pipe', 'inherit']);
+  const listening = new Promise((resolve, reject) => {
+    let seen = '';
+    const timer = setTimeout(() => {
+      server.kill('SIGKILL');
+      reject(new Error(`the server did not say where it listens within ${timeoutMs} ms; it printed: ${seen.slice(-2000) || 'nothing'}`));
+    }, timeoutMs);
+    server.stdout.setEncoding('utf8');
+    server.stdout.on('data', (chunk) => {
+      if (showOutput) process.stdout.write(chunk);
+      if (seen.length < 100_000) seen += chunk;
+      const port = /listening on http:\/\/localhost:(\d+)/.exec(seen)?.[1];
+      if (port) {
+        clearTimeout(timer);
+        resolve(`http://127.0.0.1:${port}`);
+      }
+    });
+    server.once('exit', (code, signal) => {
+      clearTimeout(timer);
+      reject(new Error(`the server exited (${code ?? signal}) before it listened; it printed: ${seen.slice(-2000) || 'nothing'}`));
+    });
+  });
+  // Later exits are the caller's business; without a handler a rejection after resolving is unhandled.
+  listening.catch(() => {});
+  return { server, listening };
+}
+
 function freePort() {
   return new Promise((resolve, reject) => {
     const srv = net.createServer();
@@ -52,4 +85,4 @@ async function waitForHealth(url, server, timeoutMs = 120_000) {
   throw new Error(`the server did not answer ${url}/api/health within ${timeoutMs} ms (last try: ${last})`);
 }
 
-module.exports = { startServer, freePort, waitForHealth };
+module.exports = { startServer, startOnFreePort, freePort, waitForHealth };

@@ -39,9 +39,9 @@ function ensureWebBuild() {
     console.error('[dilato] the web build failed; see the output above.');
     process.exit(result.status ?? 1);
   }
-  // Touch the index so its time is the build's end, after every source it read.
-  const now = new Date();
-  fs.utimesSync(distIndex, now, now);
+  // The index takes the build's start time: a source saved while the build ran is newer, so the next run builds again.
+  const startedAt = new Date(started);
+  fs.utimesSync(distIndex, startedAt, startedAt);
   console.log(`[dilato] web app built in ${((Date.now() - started) / 1000).toFixed(1)} s`);
 }
 

@@ -36,8 +36,8 @@ const envSchema = z.object({
   PORT: z.coerce
     .number({ error: 'must be a number' })
     .int({ error: 'must be a whole number' })
-    .min(1, { error: 'must be between 1 and 65535' })
-    .max(65535, { error: 'must be between 1 and 65535' })
+    .min(0, { error: 'must be between 0 (any free port, printed at start) and 65535' })
+    .max(65535, { error: 'must be between 0 (any free port, printed at start) and 65535' })
     .default(8080),
   DATA_DIR: z.string().min(1, { error: 'must not be empty' }).default('./data'),
   DATABASE_URL: z.string().regex(/^postgres(ql)?:\/\/.+/, { error: 'must be a postgres:// URL (leave it unset for the embedded SQLite database)' }).optional(),

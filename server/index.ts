@@ -1,5 +1,6 @@
 import fs from 'node:fs';
 import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
 import { createApp } from './app';
 import { ConfigError, loadConfig } from './config';
 import { answerClientErrors } from './http/request-guards';
@@ -40,9 +41,11 @@ async function main() {
   });
 
   const server: Server = app.listen(config.port, () => {
-    fakePayments?.setWebhookTarget(`http://127.0.0.1:${config.port}/api/payments/webhook`);
+    // PORT=0 takes any free port; the line below says which (scripts read it).
+    const port = (server.address() as AddressInfo).port;
+    fakePayments?.setWebhookTarget(`http://127.0.0.1:${port}/api/payments/webhook`);
     console.log(
-      `[dilato] listening on http://localhost:${config.port} (data in ${config.dataDir}` +
+      `[dilato] listening on http://localhost:${port} (data in ${config.dataDir}` +
         (config.storage.kind === 's3' ? `, data sheets in s3://${config.storage.bucket}/${config.storage.prefix}` : '') +
         '; ' +
         `seeded: ${report.alloys} alloys, ${report.sources} sources, ${report.flexParts} flex parts, ${report.weldRules} weld rules, ${report.demoUsers} demo users, ${report.demoJobs ?? 0} demo jobs; ready in ${Date.now() - startedAt} ms)` +

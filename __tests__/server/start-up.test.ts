@@ -22,7 +22,8 @@ describe('configuration', () => {
   it('when PORT is not a number, then start-up stops with a message naming PORT', () => {
     expect(() => loadConfig({ PORT: 'eighty' })).toThrow(ConfigError);
     expect(() => loadConfig({ PORT: 'eighty' })).toThrow(/PORT: must be a number/);
-    expect(() => loadConfig({ PORT: '70000' })).toThrow(/PORT: must be between 1 and 65535/);
+    expect(() => loadConfig({ PORT: '70000' })).toThrow(/PORT: must be between 0 \(any free port, printed at start\) and 65535/);
+    expect(loadConfig({ PORT: '0' }).port).toBe(0);
   });
 
   it('when SEED_DEMO or SMTP_URL are malformed, then each is named', () => {
