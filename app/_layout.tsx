@@ -11,6 +11,8 @@ import { SourceSans3_700Bold } from '@expo-google-fonts/source-sans-3/700Bold';
 import { LoadingState } from '../components/ui/loading-state';
 // Read before the router settles the address of a nested screen.
 import '../components/auth/opened-url';
+// Listens to the browser's Back and Forward before the router does.
+import '../components/forms/unsaved-guard';
 import { isApiError, shouldRetry } from '../hooks/api-client';
 import { sessionKeys } from '../hooks/use-session';
 

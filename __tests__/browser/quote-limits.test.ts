@@ -45,6 +45,13 @@ describe('an option over its temperature limit, at 390 px', () => {
     await reason.fill('Show car only: the downpipe is heat-wrapped and replaced every season.');
     await engineer.page.getByRole('button', { name: 'Record override for option 2' }).click();
     await engineer.page.getByText(/^Override by Tomas Lindqvist-Oyelaran .*“Show car only/).waitFor();
+    // Once recorded, the form folds away behind one button; opening it and keeping the override folds it again.
+    await engineer.page.getByLabel('Reason for the override of option 2', { exact: true }).waitFor({ state: 'detached' });
+    await engineer.page.getByRole('button', { name: 'Replace override for option 2' }).click();
+    await engineer.page.getByLabel('New reason for the override of option 2', { exact: true }).waitFor();
+    await engineer.page.getByRole('button', { name: 'Keep the override of option 2' }).click();
+    await engineer.page.getByRole('button', { name: 'Replace override for option 2' }).waitFor();
+    expect(await engineer.page.getByLabel('New reason for the override of option 2', { exact: true }).count()).toBe(0);
     await screenshot(engineer.page, 'quote-limits-3-engineer-override');
     expect(pageErrors(engineer.page)).toEqual([]);
     await engineer.context.close();

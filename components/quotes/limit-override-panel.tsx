@@ -1,10 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { Controller } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import type { z } from 'zod';
 import { spacing } from '../../constants/theme';
 import { messageOf } from '../../hooks/api-client';
+import { useCheckedForm } from '../forms/use-checked-form';
 import { optionLimitState } from '../../shared/quotes/limit-cautions';
 import type { PricedOption } from '../../shared/quotes/pricing';
 import { limitOverrideSchema, type LimitOverrideView } from '../../shared/schemas/quotes';
@@ -53,7 +54,7 @@ export function LimitOverridePanel({ options, overrides, canOverride, onOverride
                 <Text tone="warning">Needs an override from an engineer or admin before the quote can be sent.</Text>
               ) : null}
               {state === 'over' && canOverride && onOverride ? (
-                <OverrideForm optionIndex={index} replacing={Boolean(override)} onSubmit={onOverride} />
+                <OverrideControl optionIndex={index} replacing={Boolean(override)} onSubmit={onOverride} />
               ) : null}
             </View>
           );
@@ -63,16 +64,34 @@ export function LimitOverridePanel({ options, overrides, canOverride, onOverride
   );
 }
 
-function OverrideForm({ optionIndex, replacing, onSubmit }: { optionIndex: number; replacing: boolean; onSubmit: NonNullable<LimitOverridePanelProps['onOverride']> }) {
+interface OverrideFormProps {
+  optionIndex: number;
+  replacing: boolean;
+  onSubmit: NonNullable<LimitOverridePanelProps['onOverride']>;
+}
+
+/** An option with no override shows the form; one with an override shows it only when asked to replace it. */
+function OverrideControl(props: OverrideFormProps) {
+  const [open, setOpen] = useState(false);
+  if (!props.replacing || open) {
+    return <OverrideForm {...props} onDone={() => setOpen(false)} onCancel={props.replacing ? () => setOpen(false) : undefined} />;
+  }
+  return (
+    <View style={styles.actions}>
+      <Button label={`Replace override for option ${props.optionIndex + 1}`} variant="secondary" compact onPress={() => setOpen(true)} />
+    </View>
+  );
+}
+
+function OverrideForm({ optionIndex, replacing, onSubmit, onDone, onCancel }: OverrideFormProps & { onDone: () => void; onCancel?: () => void }) {
   const [failure, setFailure] = useState<string>();
   const {
     control,
     handleSubmit,
     reset,
     formState: { errors, isSubmitting },
-  } = useForm<z.input<typeof limitOverrideSchema>, unknown, z.output<typeof limitOverrideSchema>>({
+  } = useCheckedForm<z.input<typeof limitOverrideSchema>, unknown, z.output<typeof limitOverrideSchema>>({
     resolver: zodResolver(limitOverrideSchema),
-    mode: 'onTouched',
     defaultValues: { optionIndex, reason: '' },
   });
   const submit = handleSubmit(async (values) => {
@@ -80,6 +99,7 @@ function OverrideForm({ optionIndex, replacing, onSubmit }: { optionIndex: numbe
     try {
       await onSubmit(values);
       reset({ optionIndex, reason: '' });
+      onDone();
     } catch (error) {
       setFailure(messageOf(error));
     }
@@ -92,7 +112,7 @@ function OverrideForm({ optionIndex, replacing, onSubmit }: { optionIndex: numbe
         render={({ field: { onChange, onBlur, value, ref } }) => (
           <TextField
             ref={ref}
-            label={`Reason for the override of option ${optionIndex + 1}`}
+            label={replacing ? `New reason for the override of option ${optionIndex + 1}` : `Reason for the override of option ${optionIndex + 1}`}
             value={value}
             onChangeText={onChange}
             onBlur={onBlur}
@@ -104,13 +124,16 @@ function OverrideForm({ optionIndex, replacing, onSubmit }: { optionIndex: numbe
         )}
       />
       {failure ? <ErrorBanner title="The override was not recorded" message={failure} /> : null}
-      <Button
-        label={replacing ? `Replace override for option ${optionIndex + 1}` : `Record override for option ${optionIndex + 1}`}
-        variant="secondary"
-        compact
-        loading={isSubmitting}
-        onPress={() => void submit()}
-      />
+      <View style={styles.actions}>
+        <Button
+          label={replacing ? `Save the new reason for option ${optionIndex + 1}` : `Record override for option ${optionIndex + 1}`}
+          variant="secondary"
+          compact
+          loading={isSubmitting}
+          onPress={() => void submit()}
+        />
+        {onCancel ? <Button label={`Keep the override of option ${optionIndex + 1}`} variant="ghost" compact onPress={onCancel} /> : null}
+      </View>
     </View>
   );
 }
@@ -119,4 +142,5 @@ const styles = StyleSheet.create({
   stack: { gap: spacing.md },
   option: { gap: spacing.xs },
   form: { gap: spacing.sm },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: spacing.sm },
 });
