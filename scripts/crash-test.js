@@ -129,6 +129,12 @@ async function main() {
   process.exit(problems === 0 ? 0 : 1);
 }
 
+// A run takes well under a minute; one that hangs ends here rather than at CI's limit.
+setTimeout(() => {
+  console.error('[crash] still running after 5 minutes: stopped');
+  process.exit(1);
+}, 5 * 60_000).unref();
+
 main().catch((err) => {
   console.error(err);
   process.exit(1);
