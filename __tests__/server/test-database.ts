@@ -75,6 +75,17 @@ export async function openTestDatabase(options: { reopenable?: boolean; seed?: S
   };
 }
 
+/** A PostgreSQL database with nothing in it (not even migrations), on the run's server; dropped on close. */
+export async function openEmptyPostgresDatabase(): Promise<{ url: string; close: () => Promise<void> }> {
+  const base = process.env.DATABASE_URL!;
+  const name = `${databaseName(base)}_empty_${process.pid}_${randomBytes(4).toString('hex')}`;
+  await asAdmin(base, (c) => c.query(`CREATE DATABASE "${name}" TEMPLATE template0 ENCODING 'UTF8' LC_COLLATE 'C' LC_CTYPE 'C'`));
+  return {
+    url: withDatabase(base, name),
+    close: () => asAdmin(base, (c) => c.query(`DROP DATABASE IF EXISTS "${name}" WITH (FORCE)`)).then(() => undefined),
+  };
+}
+
 const databaseName = (url: string) => new URL(url).pathname.slice(1);
 function withDatabase(url: string, name: string): string {
   const u = new URL(url);
