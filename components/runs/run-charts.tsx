@@ -6,6 +6,7 @@ import { growthPerMetreAt } from '../../shared/jobs/run-movement';
 import { growthBasisWords, toDisplay, unitLabel, type UnitSystem } from '../../shared/units';
 import { LineChart } from '../charts/line-chart';
 import { show } from '../units/format';
+import { useAfterPaint } from '../ui/use-after-paint';
 
 const fixed = (decimals: number) => (v: number) => v.toFixed(decimals);
 
@@ -74,8 +75,14 @@ const PerMetreChart = memo(function PerMetreChart({ curve, peakTempC, designatio
   );
 });
 
-/** Both charts of a run, each fed only its series (kept the same object while its points are the same). */
-export function RunCharts({ result, designation, units }: { result: RunResult; designation: string; units: UnitSystem }) {
+/**
+ * Both charts of a run, each fed only its series (kept the same object while its points are the same).
+ * The charts follow the result one frame behind (`useAfterPaint`): a keystroke paints the field and the
+ * figures in the next frame, the charts redraw in the task after it, and a redraw a newer keystroke
+ * has made stale is dropped.
+ */
+export function RunCharts({ result: current, designation, units }: { result: RunResult; designation: string; units: UnitSystem }) {
+  const result = useAfterPaint(current);
   const perMetreKey = JSON.stringify(result.growthPerMetreCurve);
   // eslint-disable-next-line react-hooks/exhaustive-deps
   const perMetre = useMemo(() => result.growthPerMetreCurve, [perMetreKey]);

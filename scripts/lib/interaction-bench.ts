@@ -41,6 +41,12 @@ async function typeAndMeasure(page: Page, label: string, keys: string[]): Promis
   const field = page.getByRole('group', { name: 'Segment 1', exact: true }).getByLabel(label, { exact: true }).or(page.getByLabel(label, { exact: true })).first();
   await field.click();
   await page.keyboard.press('End');
+  // Ten keystrokes first, unmeasured: the figures are for a page that has been typed in, not its first JIT pass.
+  for (let i = 0; i < 10; i++) {
+    await page.keyboard.press(keys[i % keys.length]);
+    await page.waitForTimeout(60);
+  }
+  await page.evaluate('window.__frames = []');
   for (let i = 0; i < KEYSTROKES; i++) {
     await page.keyboard.press(keys[i % keys.length]);
     await page.waitForTimeout(60);
@@ -48,6 +54,13 @@ async function typeAndMeasure(page: Page, label: string, keys: string[]): Promis
   const frames = (await page.evaluate('window.__frames')) as Frame[];
   const ms = frames.map((f) => f.ms).sort((a, b) => a - b);
   return { p50: median(ms), p95: ms[Math.min(ms.length - 1, Math.floor(ms.length * 0.95))], changed: frames.filter((f) => f.changed).length };
+}
+
+/** The same probe on a bare page holding one input: what Chromium itself takes from a keystroke to the next frame here, now. */
+async function bareInputFloor(page: Page): Promise<{ p50: number; p95: number }> {
+  await page.setContent('<label>Length (mm) <input value="600"></label><div aria-label="Results">0</div>');
+  const r = await typeAndMeasure(page, 'Length (mm)', ['5', 'Backspace']);
+  return { p50: r.p50, p95: r.p95 };
 }
 
 /** Chromium on the built web app: an edit of a segment length, and a keystroke in the run name. */
@@ -77,10 +90,12 @@ export async function interactionBench(webDir: string): Promise<Row[]> {
     // A digit on and off the end of the first segment's length: every keystroke changes the growth.
     const length = await typeAndMeasure(page, 'Length (mm)', ['5', 'Backspace']);
     const name = await typeAndMeasure(page, 'Run name', ['x', 'Backspace']);
-    const note = (r: typeof length) => `p95 ${r.p95.toFixed(1)} ms; results changed by that frame in ${r.changed}/${KEYSTROKES}`;
+    const bare = await bareInputFloor(await (await browser.newContext({ viewport: { width: 1280, height: 800 } })).newPage());
+    const note = (r: typeof length) =>
+      `p95 ${r.p95.toFixed(1)} ms (bare input ${bare.p95.toFixed(1)} ms); figures changed by that frame in ${r.changed}/${KEYSTROKES}; the charts redraw in the task after it`;
     return [
-      { figure: 'edit a length → growth and chart updated, p50', product: length.p50, floor: NaN, unit: 'ms', goal: '≤ 16.7 ms, p95 ≤ 33 ms', note: note(length) },
-      { figure: 'keystroke (run name) → next frame in the run editor, p50', product: name.p50, floor: NaN, unit: 'ms', goal: '≤ 16.7 ms', note: `p95 ${name.p95.toFixed(1)} ms` },
+      { figure: 'edit a length → growth figures updated, p50 (floor: bare input)', product: length.p50, floor: bare.p50, unit: 'ms', goal: '≤ 16.7 ms, p95 ≤ 33 ms', note: note(length) },
+      { figure: 'keystroke (run name) → next frame in the run editor, p50 (floor: bare input)', product: name.p50, floor: bare.p50, unit: 'ms', goal: '≤ 16.7 ms', note: `p95 ${name.p95.toFixed(1)} ms` },
     ];
   } finally {
     await browser.close();
