@@ -30,10 +30,20 @@ async function startCluster() {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-pg-'));
   fs.chmodSync(dir, 0o777);
   const dataDir = path.join(dir, 'data');
-  const port = await freePort();
   runAsOwner(path.join(bin, 'initdb'), ['-D', dataDir, '-U', 'postgres', '--auth=trust', '-E', 'UTF8', '--locale=C']);
-  const options = `-p ${port} -k ${dir} -c listen_addresses=127.0.0.1 -c fsync=off -c synchronous_commit=off -c full_page_writes=off -c max_connections=200`;
-  runAsOwner(path.join(bin, 'pg_ctl'), ['-D', dataDir, '-o', options, '-l', path.join(dir, 'log'), '-w', 'start']);
+  // The port is free when picked but may be taken before PostgreSQL binds it (servers start beside it): try another.
+  let port;
+  for (let attempt = 1; ; attempt += 1) {
+    port = await freePort();
+    const options = `-p ${port} -k ${dir} -c listen_addresses=127.0.0.1 -c fsync=off -c synchronous_commit=off -c full_page_writes=off -c max_connections=200`;
+    try {
+      runAsOwner(path.join(bin, 'pg_ctl'), ['-D', dataDir, '-o', options, '-l', path.join(dir, 'log'), '-w', 'start']);
+      break;
+    } catch (err) {
+      if (attempt >= 3) throw err;
+      console.error(`[postgres] the cluster did not start on port ${port}; trying another`);
+    }
+  }
   return {
     url: `postgres://postgres@127.0.0.1:${port}/postgres`,
     stop: () => {
