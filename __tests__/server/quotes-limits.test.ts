@@ -184,10 +184,10 @@ describe('mixed-alloy options', () => {
     expect(res.body.quote.pricing.options[1].tempMarginC).toBe(50);
     const { view } = await sendAndOpen(sales, res.body.quote, 'per@example.test');
     const [s321, a625] = ['Type 321', 'Alloy 625'].map((d) => view.options[1].alloys.find((a) => a.designation === d)!);
-    expect(s321.plainWords).toContain('which leaves 80 °C in hand');
-    expect(s321.plainWords).not.toMatch(/leaves 0 °C/);
-    expect(a625.plainWords).toContain('Where it is used (Manifold collector), the hottest part runs at about 900 °C, which leaves 50 °C in hand');
-    for (const a of view.options[1].alloys) expect(a.plainWords).not.toMatch(/kg per litre|density/i);
+    expect(wordPhrase(s321.plainWords, 'metric')).toContain('which leaves 80 °C in hand');
+    expect(wordPhrase(s321.plainWords, 'metric')).not.toMatch(/leaves 0 °C/);
+    expect(wordPhrase(a625.plainWords, 'metric')).toContain('Where it is used (Manifold collector), the hottest part runs at about 900 °C, which leaves 50 °C in hand');
+    for (const a of view.options[1].alloys) expect(wordPhrase(a.plainWords, 'metric')).not.toMatch(/kg per litre|density/i);
   });
 });
 

@@ -70,7 +70,7 @@ export function PublicOptionCard({ option, index, currency, accepted, units, chi
           <Text variant="label">What the material means for you</Text>
           {option.alloys.map((a) => (
             <Text key={a.uns} variant="caption">
-              {a.plainWords} (UNS {a.uns})
+              {wordPhrase(a.plainWords, units)} (UNS {a.uns})
             </Text>
           ))}
         </View>

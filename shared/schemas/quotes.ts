@@ -161,6 +161,6 @@ export interface PublicQuoteView {
     limitCaution: Phrase | null;
     /** False for an option over its limit that nobody at the shop has vouched for. */
     acceptable: boolean;
-    alloys: { designation: string; uns: string; familyLabel: string; serviceLimitC: number; plainWords: string }[];
+    alloys: { designation: string; uns: string; familyLabel: string; serviceLimitC: number; plainWords: Phrase }[];
   }[];
 }
