@@ -8,21 +8,34 @@ export type UnitSystem = 'metric' | 'imperial';
  * Exact factors from NIST SP 811 Appendix B: 1 in = 25.4 mm, 1 lb = 0.45359237 kg (both exact
  * by definition), 1 psi = 6894.757 Pa. convert-units bridges metric and imperial through rounded
  * anchors (3.28084 ft/m, 453.592 g/lb: 2 in → 50.79999837 mm), which would store 50.79999837 for
- * a typed 2 in; it keeps the temperature scales (°F = °C × 9/5 + 32, exact) and the steps inside
- * one system (ft ↔ in).
+ * a typed 2 in; it keeps only the steps inside one system (ft ↔ in).
  */
 const MM_PER_IN = 25.4;
 const KG_PER_LB = 0.45359237;
-const MPA_PER_KSI = 6.894757;
+/** 1 lbf = 4.4482216152605 N (NIST SP 811 App. B, exact through the pound and standard gravity). */
+const N_PER_LBF = 4.4482216152605;
+/** 1 ksi = 1000 lbf/in² = 6.894757293… MPa (N/mm²); SP 811 prints the psi rounded as 6894.757 Pa. */
+const MPA_PER_KSI = (1000 * N_PER_LBF) / (MM_PER_IN * MM_PER_IN);
+/** 1 lb/in³ in kg/m³: 0.45359237 kg over (0.0254 m)³ = 27 679.90471… kg/m³. */
+const KG_M3_PER_LB_IN3 = KG_PER_LB / (MM_PER_IN / 1000) ** 3;
 
 export const mmToIn = (mm: number): number => mm / MM_PER_IN;
 export const inToMm = (inch: number): number => inch * MM_PER_IN;
-export const cToF = (c: number): number => convert(c).from('C').to('F');
-export const fToC = (f: number): number => convert(f).from('F').to('C');
+// °F = °C × 9/5 + 32 (NIST SP 811 §4.2.1.1), written out so a typed 932 °F is stored as 500 °C exactly.
+export const cToF = (c: number): number => (c * 9) / 5 + 32;
+export const fToC = (f: number): number => ((f - 32) * 5) / 9;
 export const kgToLb = (kg: number): number => kg / KG_PER_LB;
 export const lbToKg = (lb: number): number => lb * KG_PER_LB;
 export const mpaToKsi = (mpa: number): number => mpa / MPA_PER_KSI;
 export const ksiToMpa = (ksi: number): number => ksi * MPA_PER_KSI;
+/** Elastic modulus: GPa ↔ Msi (10⁶ psi), the unit of ASME's US-customary modulus tables. */
+export const gpaToMsi = (gpa: number): number => gpa / MPA_PER_KSI;
+export const msiToGpa = (msi: number): number => msi * MPA_PER_KSI;
+export const kgM3ToLbIn3 = (kgM3: number): number => kgM3 / KG_M3_PER_LB_IN3;
+export const lbIn3ToKgM3 = (lbIn3: number): number => lbIn3 * KG_M3_PER_LB_IN3;
+/** A price per kg ↔ per lb: a pound costs 0.45359237 of a kilogram's price. */
+export const perKgToPerLb = (perKg: number): number => perKg * KG_PER_LB;
+export const perLbToPerKg = (perLb: number): number => perLb / KG_PER_LB;
 
 /**
  * Temperature differences scale by 9/5 with no offset: a rise of 100 °C is a rise of 180 °F.
@@ -85,7 +98,12 @@ export type QuantityKind =
   | 'temperatureDelta'
   | 'mass'
   | 'stress'
-  | 'growthPerLength';
+  | 'growthPerLength'
+  // catalogue data (the alloy form, review and reading screens)
+  | 'density' // kg/m³
+  | 'modulus' // GPa
+  | 'cte' // mean coefficient, µm/(m·K)
+  | 'pricePerMass'; // a price per kg, in the alloy's currency
 
 interface Display {
   unit: string;
@@ -128,6 +146,22 @@ const DISPLAY: Record<QuantityKind, Record<UnitSystem, Display>> = {
   growthPerLength: {
     metric: { unit: 'mm/m', decimals: 2, fromSi: same, toSi: same },
     imperial: { unit: 'in/100 ft', decimals: 2, fromSi: mmPerMToInPer100Ft, toSi: inPer100FtToMmPerM },
+  },
+  density: {
+    metric: { unit: 'kg/m³', decimals: 0, fromSi: same, toSi: same },
+    imperial: { unit: 'lb/in³', decimals: 3, fromSi: kgM3ToLbIn3, toSi: lbIn3ToKgM3 },
+  },
+  modulus: {
+    metric: { unit: 'GPa', decimals: 0, fromSi: same, toSi: same },
+    imperial: { unit: 'Msi', decimals: 1, fromSi: gpaToMsi, toSi: msiToGpa },
+  },
+  cte: {
+    metric: { unit: 'µm/m·K', decimals: 2, fromSi: same, toSi: same },
+    imperial: { unit: 'µin/in·°F', decimals: 2, fromSi: cteMetricToImperial, toSi: cteImperialToMetric },
+  },
+  pricePerMass: {
+    metric: { unit: 'per kg', decimals: 2, fromSi: same, toSi: same },
+    imperial: { unit: 'per lb', decimals: 2, fromSi: perKgToPerLb, toSi: perLbToPerKg },
   },
 };
 
@@ -225,8 +259,8 @@ export function wordPhrase(p: Phrase | string, system: UnitSystem): string {
 }
 
 /** The number for an input box, at the trade's precision for the kind (0.1 mm / 0.01 in, 1 °C / 1 °F); the stored SI value stays exact. */
-export function inputNumber(kind: QuantityKind, si: number, system: UnitSystem): number {
-  return formatQuantity(kind, si, system).value;
+export function inputNumber(kind: QuantityKind, si: number, system: UnitSystem, decimals?: number): number {
+  return formatQuantity(kind, si, system, decimals).value;
 }
 
 /** What growth per length is per, in words for a title: "per metre" / "per 100 ft". */

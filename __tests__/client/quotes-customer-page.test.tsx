@@ -1,3 +1,4 @@
+import { phrase, quantity } from '../../shared/units';
 import { act, fireEvent, render, screen } from '@testing-library/react-native';
 import { PublicQuotePage } from '../../components/quotes/public-quote-page';
 import { RunOverrides } from '../../components/quotes/run-overrides';
@@ -9,7 +10,7 @@ const alloy = (designation: string, uns: string) => ({
   uns,
   familyLabel: 'Austenitic stainless',
   serviceLimitC: 870,
-  plainWords: `${designation} is good for about 870 °C in air.`,
+  plainWords: phrase`${designation} is good for about ${quantity('temperature', 870)} in air.`,
 });
 
 const option = (label: string, total: number, uns: string) => ({

@@ -1,6 +1,7 @@
 import { Quote } from '../../server/quotes/quote.entities';
 import type { AlloySummary } from '../../shared/schemas/alloy';
 import type { PublicQuoteView, QuoteView } from '../../shared/schemas/quotes';
+import { wordPhrase } from '../../shared/units';
 import { inDays, mailTo, tokenIn } from './quote-helpers';
 import { client, createTestApp, expectErrorShape, signedIn, type TestApp } from './test-app';
 
@@ -110,9 +111,12 @@ describe('options over their temperature limit', () => {
     const { token, view } = await sendAndOpen(sales, quote, 'oda@example.test');
     expect(view.options[0]).toMatchObject({ limitState: 'ok', limitCaution: null, acceptable: true });
     expect(view.options[1]).toMatchObject({ limitState: 'over', acceptable: true });
-    expect(view.options[1].limitCaution).toContain('about 380 °C hotter than it is rated for in air');
-    expect(view.options[1].limitCaution).toContain(`“${reason}”`);
-    expect(view.options[1].limitCaution).not.toMatch(/override|margin|intermittent/i);
+    const caution = wordPhrase(view.options[1].limitCaution!, 'metric');
+    expect(caution).toContain('about 380 °C hotter than it is rated for in air');
+    expect(caution).toContain(`“${reason}”`);
+    expect(caution).not.toMatch(/override|margin|intermittent/i);
+    // A difference of 380 K is 684 °F (× 9/5, no 32 °F offset: NIST SP 811 §4.2.1.1).
+    expect(wordPhrase(view.options[1].limitCaution!, 'imperial')).toContain('about 684 °F hotter');
     const accepted = await client(t.app).post(`/api/public/quotes/${token}/accept`).send({ optionIndex: 1, name: 'Oda Kallstrom' });
     expect(accepted.status).toBe(200);
   });
@@ -154,7 +158,7 @@ describe('options over their temperature limit', () => {
     expect(res.body.quote.pricing.options[1].tempMarginC).toBe(32);
     const { view } = await sendAndOpen(sales, res.body.quote, 'per@example.test');
     expect(view.options[1]).toMatchObject({ limitState: 'near', acceptable: true });
-    expect(view.options[1].limitCaution).toContain('only about 32 °C to spare');
+    expect(wordPhrase(view.options[1].limitCaution!, 'metric')).toContain('only about 32 °C to spare');
   });
 });
 
@@ -180,10 +184,10 @@ describe('mixed-alloy options', () => {
     expect(res.body.quote.pricing.options[1].tempMarginC).toBe(50);
     const { view } = await sendAndOpen(sales, res.body.quote, 'per@example.test');
     const [s321, a625] = ['Type 321', 'Alloy 625'].map((d) => view.options[1].alloys.find((a) => a.designation === d)!);
-    expect(s321.plainWords).toContain('which leaves 80 °C in hand');
-    expect(s321.plainWords).not.toMatch(/leaves 0 °C/);
-    expect(a625.plainWords).toContain('Where it is used (Manifold collector), the hottest part runs at about 900 °C, which leaves 50 °C in hand');
-    for (const a of view.options[1].alloys) expect(a.plainWords).not.toMatch(/kg per litre|density/i);
+    expect(wordPhrase(s321.plainWords, 'metric')).toContain('which leaves 80 °C in hand');
+    expect(wordPhrase(s321.plainWords, 'metric')).not.toMatch(/leaves 0 °C/);
+    expect(wordPhrase(a625.plainWords, 'metric')).toContain('Where it is used (Manifold collector), the hottest part runs at about 900 °C, which leaves 50 °C in hand');
+    for (const a of view.options[1].alloys) expect(wordPhrase(a.plainWords, 'metric')).not.toMatch(/kg per litre|density/i);
   });
 });
 

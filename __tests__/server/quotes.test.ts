@@ -4,6 +4,7 @@ import type { AlloySummary } from '../../shared/schemas/alloy';
 import { ROLES, type Role } from '../../shared/schemas/auth';
 import type { QuoteView } from '../../shared/schemas/quotes';
 import { client, createTestApp, expectErrorShape, HOST, ORIGIN, signedIn, type TestApp } from './test-app';
+import { wordPhrase } from '../../shared/units';
 
 let t: TestApp;
 beforeEach(async () => {
@@ -101,7 +102,7 @@ describe('building and sending a quote', () => {
     const opened = await customer.get(`/api/public/quotes/${token}`);
     expect(opened.status).toBe(200);
     expect(opened.body.quote.options).toHaveLength(3);
-    expect(opened.body.quote.options[1].alloys[0].plainWords).toMatch(/Alloy 625.*°C in air/);
+    expect(wordPhrase(opened.body.quote.options[1].alloys[0].plainWords, 'metric')).toMatch(/Alloy 625.*°C in air/);
     expect(JSON.stringify(opened.body)).not.toMatch(/customerEmail|labourRate|createdBy|tokenHash/);
     expect((await sales.get(`/api/quotes/${quote.id}`)).body.quote.status).toBe('viewed');
 

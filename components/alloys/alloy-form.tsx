@@ -12,7 +12,7 @@ import {
   type SourceInput,
   type SourceView,
 } from '../../shared/schemas/alloy';
-import { unitLabel, type UnitSystem } from '../../shared/units';
+import { formatQuantity, type QuantityKind, type UnitSystem } from '../../shared/units';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ErrorBanner } from '../ui/error-banner';
@@ -21,11 +21,20 @@ import { Text } from '../ui/text';
 import { TextField } from '../ui/text-field';
 import { CheckBox } from '../ui/check-box';
 import { familyLabel } from './format';
-import { NumberField } from '../ui/number-field';
+import { UnitNumberField } from '../units/unit-number-field';
 import { PointsTableField } from './points-table-field';
+import { catalogueDecimals } from './catalogue-decimals';
 import { placeServerErrors } from '../ui/server-errors';
 import { SourcePicker } from './source-picker';
 import { useCheckedForm } from '../forms/use-checked-form';
+
+const FIELD_KINDS: Record<'densityKgM3' | 'maxContinuousC' | 'maxIntermittentC' | 'pricePerKg' | 'referenceTempC', QuantityKind> = {
+  densityKgM3: 'density',
+  maxContinuousC: 'temperature',
+  maxIntermittentC: 'temperature',
+  pricePerKg: 'pricePerMass',
+  referenceTempC: 'temperature',
+};
 
 const FAMILY_OPTIONS = ALLOY_FAMILIES.map((f) => ({ value: f, label: familyLabel(f) }));
 
@@ -57,8 +66,6 @@ export function AlloyForm({ defaultValues, sources, onCreateSource, onSubmit, su
     setError,
     formState: { errors, isSubmitting, submitCount, isValid },
   } = useCheckedForm<AlloyInputDraft, unknown, AlloyInput>({ resolver: zodResolver(alloyInputSchema), defaultValues });
-  const t = unitLabel('temperature', units);
-
   const submit = handleSubmit(async (values) => {
     setFailure(undefined);
     try {
@@ -94,9 +101,12 @@ export function AlloyForm({ defaultValues, sources, onCreateSource, onSubmit, su
       control={control}
       name={name}
       render={({ field }) => (
-        <NumberField
+        <UnitNumberField
           ref={field.ref}
           label={label}
+          kind={FIELD_KINDS[name]}
+          units={units}
+          decimals={catalogueDecimals(units)}
           value={field.value}
           onChange={field.onChange}
           onBlur={field.onBlur}
@@ -145,11 +155,11 @@ export function AlloyForm({ defaultValues, sources, onCreateSource, onSubmit, su
         <Text variant="heading" headingLevel={2}>
           Density and service limits
         </Text>
-        {number('densityKgM3', 'Density (kg/m³)')}
+        {number('densityKgM3', 'Density')}
         {source('densitySourceId', 'Source of the density')}
         <View style={styles.pair}>
-          <View style={styles.half}>{number('maxContinuousC', `Continuous service limit in air (${t})`)}</View>
-          <View style={styles.half}>{number('maxIntermittentC', `Intermittent service limit in air (${t})`)}</View>
+          <View style={styles.half}>{number('maxContinuousC', 'Continuous service limit in air')}</View>
+          <View style={styles.half}>{number('maxIntermittentC', 'Intermittent service limit in air')}</View>
         </View>
         {source('limitsSourceId', 'Source of the service limits')}
       </Card>
@@ -159,7 +169,7 @@ export function AlloyForm({ defaultValues, sources, onCreateSource, onSubmit, su
           Price
         </Text>
         <View style={styles.pair}>
-          <View style={styles.half}>{number('pricePerKg', 'Price per kg')}</View>
+          <View style={styles.half}>{number('pricePerKg', 'Price')}</View>
           <View style={styles.half}>{text('currency', 'Currency', 'Three letters, e.g. EUR.')}</View>
         </View>
         {text('priceSetOn', 'Price set on', 'A date like 2026-11-01.')}
@@ -174,7 +184,7 @@ export function AlloyForm({ defaultValues, sources, onCreateSource, onSubmit, su
         <Text variant="heading" headingLevel={2}>
           Property tables
         </Text>
-        {number('referenceTempC', `Reference temperature of the mean CTE (${t})`, 'Usually 20 °C: the mean coefficients are measured from here.')}
+        {number('referenceTempC', 'Reference temperature of the mean CTE', `Usually ${formatQuantity('temperature', 20, units).text}: the mean coefficients are measured from here.`)}
         <PointsTableField table="cte" control={control} errors={errors} sources={sources} onCreateSource={onCreateSource} units={units} />
         <PointsTableField table="modulus" control={control} errors={errors} sources={sources} onCreateSource={onCreateSource} units={units} />
         <PointsTableField table="yield" control={control} errors={errors} sources={sources} onCreateSource={onCreateSource} units={units} />
@@ -243,7 +253,6 @@ export function AlloyForm({ defaultValues, sources, onCreateSource, onSubmit, su
 
 function WarningRangesField({ control, errors, units }: { control: FormControl; errors: Errors; units: UnitSystem }) {
   const { fields, append, remove } = useFieldArray({ control, name: 'warningRanges' });
-  const t = unitLabel('temperature', units);
   return (
     <View style={styles.ranges}>
       <Text variant="heading" headingLevel={3}>
@@ -262,9 +271,13 @@ function WarningRangesField({ control, errors, units }: { control: FormControl; 
                     control={control}
                     name={path(key)}
                     render={({ field }) => (
-                      <NumberField
+                      <UnitNumberField
                         ref={field.ref}
-                        label={`${key === 'fromC' ? 'From' : 'To'} (${t}), ${where}`}
+                        label={key === 'fromC' ? 'From' : 'To'}
+                        labelSuffix={`, ${where}`}
+                        kind="temperature"
+                        units={units}
+                        decimals={catalogueDecimals(units)}
                         value={field.value as number}
                         onChange={field.onChange}
                         onBlur={field.onBlur}

@@ -1,49 +1,23 @@
 import type { AlloyFamily, SourceView } from '../../shared/schemas/alloy';
 import { FAMILY_LABELS } from '../../shared/schemas/alloy';
-import {
-  cteMetricToImperial,
-  formatQuantity,
-  kgToLb,
-  mmToIn,
-  type QuantityKind,
-  toDisplay,
-  unitLabel,
-  type UnitSystem,
-} from '../../shared/units';
-
-/**
- * The alloy form and review enter and check catalogue data in metric, the units its sources
- * publish (the property tables are typed as the data sheet gives them); the catalogue's reading
- * screens follow the user's units.
- */
-export const CATALOGUE_UNITS: UnitSystem = 'metric';
+import { formatQuantity, type QuantityKind, unitLabel, type UnitSystem } from '../../shared/units';
 
 export const formatTemp = (c: number, units: UnitSystem) => formatQuantity('temperature', c, units).text;
 export const formatGrowth = (mmPerM: number, units: UnitSystem) => formatQuantity('growthPerLength', mmPerM, units).text;
 export const formatStress = (mpa: number, units: UnitSystem) => formatQuantity('stress', mpa, units).text;
 
-/** Units shared/units.ts has no kind for yet: density, modulus and the mean coefficient. */
-const LB_PER_IN3_PER_KG_PER_M3 = kgToLb(1) / mmToIn(1000) ** 3;
+export const formatDensity = (kgM3: number, units: UnitSystem) => formatQuantity('density', kgM3, units).text;
+export const formatModulus = (gpa: number, units: UnitSystem) => formatQuantity('modulus', gpa, units).text;
+export const formatCte = (umPerMK: number, units: UnitSystem) => formatQuantity('cte', umPerMK, units).text;
 
-export function formatDensity(kgM3: number, units: UnitSystem): string {
-  return units === 'metric' ? `${Math.round(kgM3)} kg/m³` : `${(kgM3 * LB_PER_IN3_PER_KG_PER_M3).toFixed(3)} lb/in³`;
-}
-
-export function formatModulus(gpa: number, units: UnitSystem): string {
-  return units === 'metric' ? `${gpa.toFixed(0)} GPa` : `${((toDisplay('stress', gpa * 1000, units)) / 1000).toFixed(1)} Msi`;
-}
-
-export function formatCte(umPerMK: number, units: UnitSystem): string {
-  return units === 'metric' ? `${umPerMK.toFixed(2)} µm/m·K` : `${cteMetricToImperial(umPerMK).toFixed(2)} µin/in·°F`;
-}
-
-export const cteUnit = (units: UnitSystem) => (units === 'metric' ? 'µm/m·K' : 'µin/in·°F');
+export const cteUnit = (units: UnitSystem) => unitLabel('cte', units);
 export const unitOf = (kind: QuantityKind, units: UnitSystem) => unitLabel(kind, units);
-export const densityUnit = (units: UnitSystem) => (units === 'metric' ? 'kg/m³' : 'lb/in³');
+export const densityUnit = (units: UnitSystem) => unitLabel('density', units);
 
+/** "4.20 EUR/kg" / "1.91 EUR/lb". */
 export function formatPrice(perKg: number, currency: string, units: UnitSystem): string {
-  const perUnit = units === 'metric' ? perKg : perKg / kgToLb(1);
-  return `${perUnit.toFixed(2)} ${currency}/${units === 'metric' ? 'kg' : 'lb'}`;
+  const f = formatQuantity('pricePerMass', perKg, units);
+  return `${f.value.toFixed(2)} ${currency}/${units === 'metric' ? 'kg' : 'lb'}`;
 }
 
 export const familyLabel = (family: AlloyFamily) => FAMILY_LABELS[family] ?? family;

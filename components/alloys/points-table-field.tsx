@@ -2,19 +2,20 @@ import { type Control, Controller, type FieldErrors, type FieldPath, useFieldArr
 import { StyleSheet, View } from 'react-native';
 import { colors, spacing } from '../../constants/theme';
 import type { AlloyInput, AlloyInputDraft, SourceInput, SourceView } from '../../shared/schemas/alloy';
-import { unitLabel, type UnitSystem } from '../../shared/units';
+import type { QuantityKind, UnitSystem } from '../../shared/units';
 import { Button } from '../ui/button';
 import { Text } from '../ui/text';
-import { NumberField } from '../ui/number-field';
+import { UnitNumberField } from '../units/unit-number-field';
+import { catalogueDecimals } from './catalogue-decimals';
 import { SourcePicker } from './source-picker';
 import { FieldError } from '../ui/field-error';
 
 export type PointTable = 'cte' | 'modulus' | 'yield';
 
-export const TABLES: Record<PointTable, { title: string; valueKey: string; valueLabel: string; unit: string }> = {
-  cte: { title: 'Mean coefficient of thermal expansion', valueKey: 'meanUmPerMK', valueLabel: 'Mean CTE', unit: 'µm/m·K' },
-  modulus: { title: 'Elastic modulus', valueKey: 'gpa', valueLabel: 'Modulus', unit: 'GPa' },
-  yield: { title: '0.2 % yield strength', valueKey: 'mpa', valueLabel: 'Yield', unit: 'MPa' },
+export const TABLES: Record<PointTable, { title: string; valueKey: string; valueLabel: string; kind: QuantityKind }> = {
+  cte: { title: 'Mean coefficient of thermal expansion', valueKey: 'meanUmPerMK', valueLabel: 'Mean CTE', kind: 'cte' },
+  modulus: { title: 'Elastic modulus', valueKey: 'gpa', valueLabel: 'Modulus', kind: 'modulus' },
+  yield: { title: '0.2 % yield strength', valueKey: 'mpa', valueLabel: 'Yield', kind: 'stress' },
 };
 
 type Message = { message?: string };
@@ -35,7 +36,6 @@ export function PointsTableField({ table, control, errors, sources, onCreateSour
   const spec = TABLES[table];
   const tableErrors = errors[table] as (RowErrors[] & Message & { root?: Message }) | undefined;
   const tableMessage = tableErrors?.root?.message ?? tableErrors?.message;
-  const t = unitLabel('temperature', units);
   const name = (i: number, key: string) => `${table}.${i}.${key}` as FieldPath<AlloyInputDraft>;
 
   return (
@@ -56,9 +56,13 @@ export function PointsTableField({ table, control, errors, sources, onCreateSour
                   control={control}
                   name={name(i, 'tempC')}
                   render={({ field: f }) => (
-                    <NumberField
+                    <UnitNumberField
                       ref={f.ref}
-                      label={`Temperature (${t}), ${where}`}
+                      label="Temperature"
+                      labelSuffix={`, ${where}`}
+                      kind="temperature"
+                      units={units}
+                      decimals={catalogueDecimals(units)}
                       value={f.value as number}
                       onChange={f.onChange}
                       onBlur={f.onBlur}
@@ -72,9 +76,13 @@ export function PointsTableField({ table, control, errors, sources, onCreateSour
                   control={control}
                   name={name(i, spec.valueKey)}
                   render={({ field: f }) => (
-                    <NumberField
+                    <UnitNumberField
                       ref={f.ref}
-                      label={`${spec.valueLabel} (${spec.unit}), ${where}`}
+                      label={spec.valueLabel}
+                      labelSuffix={`, ${where}`}
+                      kind={spec.kind}
+                      units={units}
+                      decimals={catalogueDecimals(units)}
                       value={f.value as number}
                       onChange={f.onChange}
                       onBlur={f.onBlur}

@@ -21,7 +21,7 @@ export function formatPercentDifference(pct: number | null): string {
   return `${sign(pct)}${Math.abs(pct).toFixed(1)} %`;
 }
 
-/** Masses and temperature margins follow the reader's units; the customer's page (no account) reads metric. */
+/** Masses and temperature margins follow the reader's units (the customer's page: their switch on it). */
 export function formatKg(kg: number, units: UnitSystem = 'metric'): string {
   return formatQuantity('mass', kg, units).text;
 }

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '../../constants/theme';
 import type { PublicQuoteView } from '../../shared/schemas/quotes';
+import { type UnitSystem, wordPhrase } from '../../shared/units';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { formatDegrees, formatDegreesDifference, formatKg, formatKgDifference, formatMoney, formatMoneyDifference, formatPercentDifference } from './format';
@@ -13,16 +14,20 @@ export interface PublicOptionCardProps {
   index: number;
   currency: string;
   accepted: boolean;
+  /** The customer's choice on the page. */
+  units: UnitSystem;
   /** The accept button or form, while the customer may still decide. */
   children?: ReactNode;
 }
 
-function headroom(c: number): string {
-  return c < 0 ? `The hottest part runs ${formatDegrees(-c)} above what this material is rated for.` : `${formatDegrees(c)} of temperature in hand at the hottest part.`;
+function headroom(c: number, units: UnitSystem): string {
+  return c < 0
+    ? `The hottest part runs ${formatDegrees(-c, units)} above what this material is rated for.`
+    : `${formatDegrees(c, units)} of temperature in hand at the hottest part.`;
 }
 
 /** One option as the customer weighs it: price, the difference from option 1, weight and heat. */
-export function PublicOptionCard({ option, index, currency, accepted, children }: PublicOptionCardProps) {
+export function PublicOptionCard({ option, index, currency, accepted, units, children }: PublicOptionCardProps) {
   const first = index === 0;
   return (
     <Card edge={accepted ? 'primary' : first ? 'muted' : undefined} style={styles.card}>
@@ -47,25 +52,25 @@ export function PublicOptionCard({ option, index, currency, accepted, children }
         <View style={styles.facts}>
           <Text>
             <Text variant="bodyStrong">Weight: </Text>
-            {formatKg(option.massKg)}
-            {first ? '' : ` (${formatKgDifference(option.massDifferenceKg)} against option 1)`}
+            {formatKg(option.massKg, units)}
+            {first ? '' : ` (${formatKgDifference(option.massDifferenceKg, units)} against option 1)`}
           </Text>
           <Text>
             <Text variant="bodyStrong">Heat: </Text>
-            {headroom(option.tempMarginC)}
-            {first ? '' : ` ${formatDegreesDifference(option.tempMarginGainedC)} against option 1.`}
+            {headroom(option.tempMarginC, units)}
+            {first ? '' : ` ${formatDegreesDifference(option.tempMarginGainedC, units)} against option 1.`}
           </Text>
         </View>
         {option.limitCaution ? (
           <View style={[styles.caution, option.limitState === 'over' ? styles.over : null]} role="note" aria-label={`Temperature caution for option ${index + 1}`}>
-            <Text variant="bodyStrong">{option.limitCaution}</Text>
+            <Text variant="bodyStrong">{wordPhrase(option.limitCaution, units)}</Text>
           </View>
         ) : null}
         <View style={styles.alloys}>
           <Text variant="label">What the material means for you</Text>
           {option.alloys.map((a) => (
             <Text key={a.uns} variant="caption">
-              {a.plainWords} (UNS {a.uns})
+              {wordPhrase(a.plainWords, units)} (UNS {a.uns})
             </Text>
           ))}
         </View>

@@ -1,9 +1,12 @@
 import { type ReactNode, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '../../constants/theme';
+import { useCustomerUnits } from '../../hooks/use-customer-units';
 import type { PublicDecision } from '../../hooks/use-public-quote';
 import type { PublicQuoteView } from '../../shared/schemas/quotes';
 import { Button } from '../ui/button';
+import { SegmentedControl } from '../ui/segmented-control';
+import { UNIT_OPTIONS } from '../units/unit-switch';
 import { Card } from '../ui/card';
 import { Text } from '../ui/text';
 import { CustomerCautions } from './customer-cautions';
@@ -24,6 +27,7 @@ export function PublicQuotePage({ quote, onDecide, depositSection }: PublicQuote
   const [step, setStep] = useState<Step>({ kind: 'choosing' });
   const [decidedBy, setDecidedBy] = useState<string>();
   const open = quote.status === 'sent' || quote.status === 'viewed';
+  const [units, setUnits] = useCustomerUnits();
 
   return (
     <View style={styles.page}>
@@ -40,6 +44,7 @@ export function PublicQuotePage({ quote, onDecide, depositSection }: PublicQuote
         </Text>
         <Text tone="muted">Valid until {quote.validUntil}</Text>
         {quote.message ? <Text>{quote.message}</Text> : null}
+        <SegmentedControl label="Show weights and temperatures in" options={UNIT_OPTIONS} value={units} onChange={setUnits} />
       </View>
 
       <Decided quote={quote} decidedBy={decidedBy} />
@@ -47,7 +52,7 @@ export function PublicQuotePage({ quote, onDecide, depositSection }: PublicQuote
 
       <View style={styles.options}>
         {quote.options.map((option, index) => (
-          <PublicOptionCard key={index} option={option} index={index} currency={quote.currency} accepted={quote.acceptedOptionIndex === index}>
+          <PublicOptionCard key={index} option={option} index={index} currency={quote.currency} accepted={quote.acceptedOptionIndex === index} units={units}>
             {open && step.kind === 'choosing' && option.acceptable ? (
               <Button label={`Accept option ${index + 1}`} onPress={() => setStep({ kind: 'accepting', index })} />
             ) : null}

@@ -1,3 +1,4 @@
+import { wordFieldMessage } from '../../shared/field-messages';
 import { memo } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '../../constants/theme';
@@ -46,7 +47,7 @@ export const RunResults = memo(function RunResults({ live, fields, units }: RunR
           <Text variant="bodyStrong" tone={live.state === 'waiting' ? 'default' : 'danger'}>
             {live.state === 'waiting' ? 'Results wait for complete inputs' : 'No result for these inputs'}
           </Text>
-          <Text tone={live.state === 'waiting' ? 'muted' : 'danger'}>{live.message}</Text>
+          <Text tone={live.state === 'waiting' ? 'muted' : 'danger'}>{wordFieldMessage(live.message, units)}</Text>
         </View>
       )}
       <CautionsNote />

@@ -15,8 +15,8 @@ export function showSigned(kind: QuantityKind, si: number, units: UnitSystem): s
 export const withUnit = (label: string, kind: QuantityKind, units: UnitSystem) => `${label} (${unitLabel(kind, units)})`;
 
 /** A number for an input box in the chosen system at the trade's precision (466.111 °C typed as 871 °F shows "871"). */
-export function inputText(kind: QuantityKind, si: number, units: UnitSystem): string {
-  return String(inputNumber(kind, si, units));
+export function inputText(kind: QuantityKind, si: number, units: UnitSystem, decimals?: number): string {
+  return String(inputNumber(kind, si, units, decimals));
 }
 
 export function showMoney(amount: number | null, currency: string | null): string {

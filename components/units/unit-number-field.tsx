@@ -1,5 +1,6 @@
 import { type Ref, useState } from 'react';
 import type { TextInput } from 'react-native';
+import { wordFieldMessage } from '../../shared/field-messages';
 import { fromDisplay, type QuantityKind, type UnitSystem } from '../../shared/units';
 import { TextField, type TextFieldProps } from '../ui/text-field';
 import { inputText, withUnit } from './format';
@@ -16,6 +17,8 @@ export interface UnitNumberFieldProps extends Omit<TextFieldProps, 'value' | 'on
   value: number | undefined;
   /** Receives SI: what is typed in inches or °F is converted before it reaches the form. */
   onChange: (si: number) => void;
+  /** Decimals shown for a stored value, where the kind's trade precision would hide a datum's figures. */
+  decimals?: number;
   /** The form's handle on the box, so a failed save can focus it (React 19 passes refs as props). */
   ref?: Ref<TextInput>;
 }
@@ -36,7 +39,7 @@ function same(a: number, b: number): boolean {
  * A number typed in the user's units and kept in SI. What the person typed stays in the box
  * while it stands for the value; a value set from outside (a preset, a unit switch) replaces it.
  */
-export function UnitNumberField({ label, labelSuffix = '', kind, units, value, onChange, ref, ...rest }: UnitNumberFieldProps) {
+export function UnitNumberField({ label, labelSuffix = '', kind, units, value, onChange, decimals, error, ref, ...rest }: UnitNumberFieldProps) {
   const [typed, setTyped] = useState<{ text: string; units: UnitSystem } | null>(null);
   const parsed = typed ? parse(typed.text) : Number.NaN;
   const toSi = (n: number) => (kind ? fromDisplay(kind, n, units) : n);
@@ -44,7 +47,7 @@ export function UnitNumberField({ label, labelSuffix = '', kind, units, value, o
     typed !== null &&
     typed.units === units &&
     ((Number.isNaN(parsed) && blank(value)) || (!Number.isNaN(parsed) && !blank(value) && same(toSi(parsed), value!)));
-  const shown = inSync ? typed.text : blank(value) ? '' : kind ? inputText(kind, value!, units) : String(value);
+  const shown = inSync ? typed.text : blank(value) ? '' : kind ? inputText(kind, value!, units, decimals) : String(value);
   return (
     <TextField
       ref={ref}
@@ -55,6 +58,7 @@ export function UnitNumberField({ label, labelSuffix = '', kind, units, value, o
         const n = parse(text);
         onChange(Number.isNaN(n) ? Number.NaN : toSi(n));
       }}
+      error={error ? wordFieldMessage(error, units, kind) : error}
       inputMode="decimal"
       keyboardType="numbers-and-punctuation"
       {...rest}

@@ -6,7 +6,7 @@ import type { UnitSystem } from '../../shared/units';
 import { SegmentedControl } from '../ui/segmented-control';
 import { Text } from '../ui/text';
 
-const OPTIONS = [
+export const UNIT_OPTIONS = [
   { value: 'metric', label: 'Metric (mm, °C)' },
   { value: 'imperial', label: 'Imperial (in, °F)' },
 ] as const satisfies readonly { value: UnitSystem; label: string }[];
@@ -20,7 +20,7 @@ export function UnitSwitch() {
     <View>
       <SegmentedControl
         label="Units"
-        options={OPTIONS}
+        options={UNIT_OPTIONS}
         value={units}
         disabled={prefs.isPending}
         onChange={(unitSystem) => save.mutate({ unitSystem })}

@@ -3,6 +3,7 @@ import { limitCautionWords, optionLimitState } from '../../shared/quotes/limit-c
 import type { PricedAlloy, PricedOption, PricedRunInput } from '../../shared/quotes/pricing';
 import { FAMILY_LABELS } from '../../shared/schemas/alloy';
 import type { LimitOverrideView, PublicQuoteView, QuotePricing } from '../../shared/schemas/quotes';
+import { phrase, quantity } from '../../shared/units';
 
 type PublicOption = PublicQuoteView['options'][number];
 type PublicAlloy = PublicOption['alloys'][number];
@@ -22,11 +23,11 @@ function alloyWords(alloy: PricedAlloy, option: PricedOption, runs: ReadonlyMap<
     uns: alloy.uns,
     familyLabel: family,
     serviceLimitC: limit.governingC,
+    // Temperatures as quantities, so the customer's own unit switch words them; the margin is a difference.
     plainWords:
-      `${alloy.designation} (${family.toLowerCase()}) is good for about ${Math.round(limit.governingC)} °C in air. ` +
-      (limit.marginC >= 0
-        ? `${where} runs at about ${Math.round(hottest)} °C, which leaves ${Math.round(limit.marginC)} °C in hand.`
-        : `${where} runs at about ${Math.round(hottest)} °C, above what it is rated for: ask us before choosing it there.`),
+      limit.marginC >= 0
+        ? phrase`${alloy.designation} (${family.toLowerCase()}) is good for about ${quantity('temperature', limit.governingC)} in air. ${where} runs at about ${quantity('temperature', hottest)}, which leaves ${quantity('temperatureDelta', limit.marginC)} in hand.`
+        : phrase`${alloy.designation} (${family.toLowerCase()}) is good for about ${quantity('temperature', limit.governingC)} in air. ${where} runs at about ${quantity('temperature', hottest)}, above what it is rated for: ask us before choosing it there.`,
   };
 }
 

@@ -1,4 +1,5 @@
 import { CAUTION_MARGIN_C } from '../engine/limits';
+import { phrase, type Phrase, quantity } from '../units';
 import type { PricedOption } from './pricing';
 
 /** How an option stands against its temperature limit at the hottest run: the run that limits it. */
@@ -29,22 +30,16 @@ export interface OverrideWords {
  * The caution the customer reads beside an option that runs over, or near, what its material is
  * rated for, in words without jargon. Null for an option with room to spare.
  */
-export function limitCautionWords(option: Pick<PricedOption, 'tempMarginC'>, override: OverrideWords | null): string | null {
+export function limitCautionWords(option: Pick<PricedOption, 'tempMarginC'>, override: OverrideWords | null): Phrase | null {
   const state = optionLimitState(option);
-  const degrees = `${Math.round(Math.abs(option.tempMarginC))} °C`;
+  // A margin is a difference of temperature: 380 °C reads 684 °F, with no 32 °F offset.
+  const degrees = quantity('temperatureDelta', Math.abs(option.tempMarginC));
   if (state === 'over') {
-    return (
-      `Caution: at the hottest part of your system this material would run about ${degrees} hotter than it is rated for in air. ` +
-      'Metal that hot scales and weakens faster, so parts there may need replacing sooner. ' +
-      (override ? `${override.by} checked this option and recorded why it is still offered: “${sentence(override.reason)}” ` : '') +
-      'Please talk to us before choosing it.'
-    );
+    const vouched = override ? `${override.by} checked this option and recorded why it is still offered: “${sentence(override.reason)}” ` : '';
+    return phrase`Caution: at the hottest part of your system this material would run about ${degrees} hotter than it is rated for in air. Metal that hot scales and weakens faster, so parts there may need replacing sooner. ${vouched}Please talk to us before choosing it.`;
   }
   if (state === 'near') {
-    return (
-      `Caution: at the hottest part of your system this material has only about ${degrees} to spare before its rated temperature. ` +
-      'Real temperatures often vary by tens of degrees, so ask us if your system may run hotter than planned.'
-    );
+    return phrase`Caution: at the hottest part of your system this material has only about ${degrees} to spare before its rated temperature. Real temperatures often vary by tens of degrees, so ask us if your system may run hotter than planned.`;
   }
   return null;
 }

@@ -4,6 +4,7 @@ import type { OptionComparison, PricedAlloy, PricedOption, PricedRunInput } from
 import { emailSchema } from './auth';
 import type { OptionLimitState } from '../quotes/limit-cautions';
 import type { DepositView } from './deposits';
+import type { Phrase } from '../units';
 
 export const QUOTE_STATUSES = ['draft', 'sent', 'viewed', 'accepted', 'declined', 'expired'] as const;
 export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
@@ -157,9 +158,9 @@ export interface PublicQuoteView {
     tempMarginGainedC: number;
     limitState: OptionLimitState;
     /** The temperature caution in plain words, for an option over or near its limit. */
-    limitCaution: string | null;
+    limitCaution: Phrase | null;
     /** False for an option over its limit that nobody at the shop has vouched for. */
     acceptable: boolean;
-    alloys: { designation: string; uns: string; familyLabel: string; serviceLimitC: number; plainWords: string }[];
+    alloys: { designation: string; uns: string; familyLabel: string; serviceLimitC: number; plainWords: Phrase }[];
   }[];
 }

@@ -2,7 +2,6 @@ import { useRouter } from 'expo-router';
 import { useState } from 'react';
 import { AlloyForm } from '../../../components/alloys/alloy-form';
 import { emptyAlloy } from '../../../components/alloys/alloy-form-values';
-import { CATALOGUE_UNITS } from '../../../components/alloys/format';
 import { EDITORS, RoleGate } from '../../../components/alloys/role-gate';
 import { TextLink } from '../../../components/ui/text-link';
 import { ErrorBanner } from '../../../components/ui/error-banner';
@@ -11,6 +10,7 @@ import { Screen } from '../../../components/ui/screen';
 import { Text } from '../../../components/ui/text';
 import { messageOf } from '../../../hooks/api-client';
 import { useCreateAlloyMutation } from '../../../hooks/use-alloys';
+import { useUnits } from '../../../hooks/use-units';
 import { useCreateSourceMutation, useSourcesQuery } from '../../../hooks/use-sources';
 import { useScreenTitle } from '../../../components/ui/use-screen-title';
 
@@ -26,6 +26,7 @@ export default function NewAlloyScreen() {
 function NewAlloy() {
   const router = useRouter();
   const sources = useSourcesQuery();
+  const units = useUnits();
   const createSource = useCreateSourceMutation();
   const create = useCreateAlloyMutation();
   const [defaults] = useState(emptyAlloy);
@@ -47,7 +48,7 @@ function NewAlloy() {
           sources={sources.data}
           onCreateSource={(input) => createSource.mutateAsync(input)}
           submitLabel="Save draft"
-          units={CATALOGUE_UNITS}
+          units={units}
           onSubmit={async (values, note) => {
             const alloy = await create.mutateAsync({ ...values, note });
             router.replace(`/alloys/${alloy.id}`);

@@ -1,7 +1,6 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { AlloyForm } from '../../../../components/alloys/alloy-form';
 import { toFormValues } from '../../../../components/alloys/alloy-form-values';
-import { CATALOGUE_UNITS } from '../../../../components/alloys/format';
 import { EDITORS, RoleGate } from '../../../../components/alloys/role-gate';
 import { TextLink } from '../../../../components/ui/text-link';
 import { ErrorBanner } from '../../../../components/ui/error-banner';
@@ -10,6 +9,7 @@ import { Screen } from '../../../../components/ui/screen';
 import { Text } from '../../../../components/ui/text';
 import { messageOf } from '../../../../hooks/api-client';
 import { useAlloyQuery, useUpdateAlloyMutation } from '../../../../hooks/use-alloys';
+import { useUnits } from '../../../../hooks/use-units';
 import { useCreateSourceMutation, useSourcesQuery } from '../../../../hooks/use-sources';
 import { useScreenTitle } from '../../../../components/ui/use-screen-title';
 
@@ -27,6 +27,7 @@ function EditAlloy() {
   const router = useRouter();
   const alloy = useAlloyQuery(id);
   const sources = useSourcesQuery();
+  const units = useUnits();
   const createSource = useCreateSourceMutation();
   const update = useUpdateAlloyMutation(id ?? '');
 
@@ -63,7 +64,7 @@ function EditAlloy() {
         sources={sources.data}
         onCreateSource={(input) => createSource.mutateAsync(input)}
         submitLabel="Save draft"
-        units={CATALOGUE_UNITS}
+        units={units}
         onSubmit={async (values, note) => {
           await update.mutateAsync({ ...values, note: note || undefined });
           router.replace(`/alloys/${alloy.data.id}`);

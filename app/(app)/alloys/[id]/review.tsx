@@ -1,7 +1,6 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { DiffList } from '../../../../components/alloys/diff-list';
 import { sourceMap } from '../../../../components/alloys/diff-text';
-import { CATALOGUE_UNITS } from '../../../../components/alloys/format';
 import { RoleGate } from '../../../../components/alloys/role-gate';
 import { StatusActions } from '../../../../components/alloys/status-actions';
 import { TextLink } from '../../../../components/ui/text-link';
@@ -16,6 +15,7 @@ import { useAlloyReviewQuery, useAlloyStatusMutation, useReviewStepMutation } fr
 import { SendBackForm } from '../../../../components/alloys/review-step-forms';
 import { useState } from 'react';
 import { useScreenTitle } from '../../../../components/ui/use-screen-title';
+import { useUnits } from '../../../../hooks/use-units';
 import { useSourcesQuery } from '../../../../hooks/use-sources';
 
 export default function ReviewAlloyScreen() {
@@ -34,6 +34,7 @@ function ReviewAlloy() {
   const [publishing, setPublishing] = useState(false);
   const review = useAlloyReviewQuery(id, !publishing);
   const sources = useSourcesQuery();
+  const units = useUnits();
   const status = useAlloyStatusMutation(id ?? '');
   const reviewStep = useReviewStepMutation(id ?? '');
   const back = <TextLink href={`/alloys/${id}`} label="← Back to the alloy" accessibilityLabel="Back to the alloy" />;
@@ -68,7 +69,7 @@ function ReviewAlloy() {
         <Text variant="heading" headingLevel={2}>
           {diff.length === 1 ? '1 change' : `${diff.length} changes`}
         </Text>
-        <DiffList diff={diff} sources={sourceMap(sources.data)} units={CATALOGUE_UNITS} label="Changes to publish" />
+        <DiffList diff={diff} sources={sourceMap(sources.data)} units={units} label="Changes to publish" />
       </Card>
       <Card>
         <Text variant="heading" headingLevel={2}>

@@ -3,7 +3,6 @@ import { useState } from 'react';
 import { useScreenTitle } from '../../../../components/ui/use-screen-title';
 import { AlloyCharts } from '../../../../components/alloys/alloy-charts';
 import { AlloyProperties } from '../../../../components/alloys/alloy-properties';
-import { CATALOGUE_UNITS } from '../../../../components/alloys/format';
 import { indexSources, SourceList } from '../../../../components/alloys/source-citation';
 import { VersionList } from '../../../../components/alloys/version-list';
 import { CautionsNote } from '../../../../components/ui/cautions-note';
@@ -15,6 +14,7 @@ import { Text } from '../../../../components/ui/text';
 import { TextLink } from '../../../../components/ui/text-link';
 import { messageOf } from '../../../../hooks/api-client';
 import { useAlloyVersionQuery, useAlloyVersionsQuery } from '../../../../hooks/use-alloys';
+import { useUnits } from '../../../../hooks/use-units';
 import { useSourcesQuery } from '../../../../hooks/use-sources';
 import type { AlloyVersionView, SourceView } from '../../../../shared/schemas/alloy';
 
@@ -67,6 +67,7 @@ export default function AlloyVersionsScreen() {
 }
 
 function VersionBody({ version, sources }: { version: AlloyVersionView; sources: SourceView[] }) {
+  const units = useUnits();
   const index = indexSources(
     [version.densitySourceId, version.limitsSourceId, ...[...version.cte, ...version.modulus, ...version.yield].map((p) => p.sourceId)],
     sources,
@@ -74,10 +75,10 @@ function VersionBody({ version, sources }: { version: AlloyVersionView; sources:
   return (
     <>
       <Section title="Properties">
-        <AlloyProperties version={version} index={index} units={CATALOGUE_UNITS} />
+        <AlloyProperties version={version} index={index} units={units} />
       </Section>
       <Section title="Expansion">
-        <AlloyCharts version={version} units={CATALOGUE_UNITS} />
+        <AlloyCharts version={version} units={units} />
         <CautionsNote />
       </Section>
       <Section title="Sources">
