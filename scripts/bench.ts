@@ -89,6 +89,11 @@ function printTable(rows: Row[]) {
 }
 
 async function main() {
+  // BENCH_ONLY=server: just the server rows of issue 12 (no engine, import or Chromium rows).
+  if (process.env.BENCH_ONLY === 'server') {
+    printTable(await serverBench((line) => console.log(line)));
+    return;
+  }
   const b = await importBench();
   const ms = (x: number) => `${fmt(x, 1)} ms`;
   console.log('');

@@ -7,6 +7,7 @@ import { authRouter } from './auth/auth.router';
 import { AuthService } from './auth/auth.service';
 import { createLucia } from './auth/lucia';
 import { loadSession } from './auth/session';
+import { SessionCache } from './auth/session-cache';
 import { KnownAddressesRepository } from './auth/known-addresses.repository';
 import { DEFAULT_SIGN_IN_LIMITS, SignInLimiter, type SignInLimits } from './auth/sign-in-limits';
 import { apiNotFound, errorHandler } from './http/error-handler';
@@ -86,8 +87,9 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   const usersRepository = new UsersRepository(dataSource);
   const counters = databaseCounters(dataSource);
   const signInLimiter = new SignInLimiter({ ...DEFAULT_SIGN_IN_LIMITS, ...options.signInLimits }, counters);
-  const authService = new AuthService(usersRepository, auth, signInLimiter, new KnownAddressesRepository(dataSource), options.mailer);
-  const usersService = new UsersService(usersRepository, auth);
+  const sessions = new SessionCache(auth);
+  const authService = new AuthService(usersRepository, auth, sessions, signInLimiter, new KnownAddressesRepository(dataSource), options.mailer);
+  const usersService = new UsersService(usersRepository, sessions);
   const catalogueStore = new CatalogueStore(dataSource);
   const catalogueService = new CatalogueService(catalogueStore);
   const objectStore = options.objectStore ?? new FolderObjectStore(options.uploadsDir);
@@ -129,7 +131,7 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.use(paymentWebhookRouter(new DepositWebhooks(depositsStore, deposits, options.payments?.webhookSecret)));
   api.use(express.json({ limit: '1mb' }));
   api.use(requireSameOrigin(options.publicUrl));
-  api.use(loadSession(auth));
+  api.use(loadSession(auth, sessions));
   api.get('/health', (_req, res) => {
     res.json({ status: 'ok' });
   });

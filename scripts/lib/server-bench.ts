@@ -66,10 +66,17 @@ function calcBody(alloyId: string) {
 
 export async function serverBench(log: (line: string) => void): Promise<Row[]> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-bench-'));
+  // BENCH_BIG_DB=file keeps the generated database there and reuses it on the next run (a copy is served, so runs do not change it).
+  const kept = process.env.BENCH_BIG_DB;
   const bigFile = path.join(dir, 'big.sqlite');
   const t0 = performance.now();
-  await generateBigDb(bigFile);
-  log(`  generated database: 10,000 alloys, 2,000 jobs, 100,000 runs in ${((performance.now() - t0) / 1000).toFixed(1)} s (${(fs.statSync(bigFile).size / 1024 / 1024).toFixed(0)} MB)`);
+  const reused = Boolean(kept && fs.existsSync(kept));
+  if (reused) fs.copyFileSync(kept!, bigFile);
+  else {
+    await generateBigDb(bigFile);
+    if (kept) fs.copyFileSync(bigFile, kept);
+  }
+  log(`  ${reused ? 'copied' : 'generated'} database: 10,000 alloys, 2,000 jobs, 100,000 runs in ${((performance.now() - t0) / 1000).toFixed(1)} s (${(fs.statSync(bigFile).size / 1024 / 1024).toFixed(0)} MB)`);
 
   const small = await startChild(['product', path.join(dir, 'small.sqlite'), 'fresh']);
   const floor = await startChild(['floor']);

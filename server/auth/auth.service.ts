@@ -5,6 +5,7 @@ import type { UsersRepository } from '../users/users.repository';
 import { toPublicUser } from '../users/users.service';
 import type { KnownAddressesRepository } from './known-addresses.repository';
 import type { Auth } from './lucia';
+import type { SessionCache } from './session-cache';
 import { verifyPassword } from './passwords';
 import { addressHash, type SignInLimiter } from './sign-in-limits';
 import { strangerSignInMail } from './sign-in-notice';
@@ -17,6 +18,7 @@ export class AuthService {
   constructor(
     private readonly users: UsersRepository,
     private readonly auth: Auth,
+    private readonly sessions: SessionCache,
     private readonly limiter: SignInLimiter,
     private readonly addresses: KnownAddressesRepository,
     private readonly mailer?: Mailer,
@@ -55,6 +57,6 @@ export class AuthService {
   }
 
   signOut(sessionId: string) {
-    return this.auth.invalidateSession(sessionId);
+    return this.sessions.invalidateSession(sessionId);
   }
 }

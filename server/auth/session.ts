@@ -2,6 +2,7 @@ import type { Request, RequestHandler, Response } from 'express';
 import type { Role, PublicUser } from '../../shared/schemas/auth';
 import { AppError } from '../http/app-error';
 import type { Auth } from './lucia';
+import type { SessionCache } from './session-cache';
 
 declare global {
   namespace Express {
@@ -25,13 +26,13 @@ export function writeSessionCookie(auth: Auth, req: Request, res: Response, sess
 }
 
 /** Reads the session cookie on every request and attaches the signed-in user, if any. */
-export function loadSession(auth: Auth): RequestHandler {
+export function loadSession(auth: Auth, sessions: SessionCache): RequestHandler {
   return async (req, res, next) => {
     const sessionId = auth.readSessionCookie(req.headers.cookie ?? '');
     if (!sessionId) return next();
-    const { session, user } = await auth.validateSession(sessionId);
+    const { session, user } = await sessions.validate(sessionId);
     if (!session || !user || !user.active) {
-      if (session) await auth.invalidateSession(session.id);
+      if (session) await sessions.invalidateSession(session.id);
       writeSessionCookie(auth, req, res, null);
       return next();
     }

@@ -4,7 +4,7 @@ import type { PublicUser } from '../../shared/schemas/auth';
 import { isUniqueViolation } from '../db/errors';
 import { AppError } from '../http/app-error';
 import { hashPassword } from '../auth/passwords';
-import type { Auth } from '../auth/lucia';
+import type { SessionCache } from '../auth/session-cache';
 import type { User } from './user.entity';
 import type { UsersRepository } from './users.repository';
 
@@ -19,7 +19,7 @@ export function toManagedUser(user: User): ManagedUser {
 export class UsersService {
   constructor(
     private readonly users: UsersRepository,
-    private readonly auth: Auth,
+    private readonly sessions: SessionCache,
   ) {}
 
   async list(): Promise<ManagedUser[]> {
@@ -65,7 +65,7 @@ export class UsersService {
 
     // A deactivated user, a changed role or a new password ends every open session at once.
     if (input.active === false || input.role !== undefined || input.password !== undefined) {
-      await this.auth.invalidateUserSessions(user.id);
+      await this.sessions.invalidateUserSessions(user.id);
     }
     return toManagedUser(saved);
   }
