@@ -180,6 +180,8 @@ describe('the alloy catalogue', () => {
     await admin.getByRole('link', { name: 'Flex parts' }).first().click();
     await admin.getByRole('heading', { name: 'Flex parts', level: 1 }).waitFor();
     await admin.getByRole('heading', { name: 'Add a flex part' }).waitFor();
+    // The form shows before the list has loaded.
+    await admin.getByRole('article').nth(11).waitFor();
     expect(await admin.getByRole('article').count()).toBeGreaterThanOrEqual(12);
     expect(await admin.getByRole('button', { name: /^Edit / }).count()).toBeGreaterThanOrEqual(12);
     await screenshot(admin, 'catalogue-flex-parts-admin');
