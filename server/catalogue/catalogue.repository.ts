@@ -89,7 +89,7 @@ export class CatalogueRepository {
     return this.m.find(Source, { order: { title: 'ASC' } });
   }
   findSources(ids: string[]) {
-    return ids.length === 0 ? Promise.resolve([]) : this.m.findBy(Source, { id: In(ids) });
+    return ids.length === 0 ? Promise.resolve([]) : this.m.find(Source, { where: { id: In(ids) }, order: { title: 'ASC', id: 'ASC' } });
   }
   findSourceByKey(key: string) {
     return this.m.findOneBy(Source, { key });
@@ -131,5 +131,14 @@ export class CatalogueRepository {
 export class CatalogueStore extends Store<CatalogueRepository> {
   constructor(dataSource: DataSource) {
     super(dataSource, (m) => new CatalogueRepository(m));
+  }
+
+  /** Every catalogue write moves the catalogue's stamp in its own transaction, so no cache read under the old stamp outlives it. */
+  override write<T>(work: (repo: CatalogueRepository) => Promise<T>): Promise<T> {
+    return super.write(async (repo) => {
+      const result = await work(repo);
+      await repo.stamps.bump('catalogue');
+      return result;
+    });
   }
 }

@@ -52,6 +52,8 @@ export class CatalogueService {
   private readonly published = new StampedCache<PublishedAlloy | null>();
   /** Expansion tables by version id for the list's growth column; an edit of a draft's tables bumps the stamp. */
   private readonly cteTables = new StampedCache<CtePoint[]>(20_000);
+  /** Whole list pages by query and role: a shop's people mostly ask for the same few pages. */
+  private readonly listPages = new StampedCache<{ items: AlloySummary[]; total: number }>(500);
 
   constructor(private readonly store: CatalogueStore) {}
 
@@ -75,7 +77,8 @@ export class CatalogueService {
     const repo = this.store.read();
     const stamp = await repo.stamps.read('catalogue');
     const ctePoints = (ids: string[]) => this.cteTables.getMany(stamp, ids, (missing) => repo.list.ctePoints(missing));
-    return alloyListPage(repo.list, ctePoints, query, filter, editor);
+    const key = JSON.stringify([query, filter, editor]);
+    return this.listPages.get(stamp, key, () => alloyListPage(repo.list, ctePoints, query, filter, editor));
   }
 
   async visibleAlloy(repo: CatalogueRepository, id: string, actor: Actor): Promise<Alloy> {
