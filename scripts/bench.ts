@@ -9,6 +9,7 @@ import { importBench } from './lib/import-bench';
 import path from 'node:path';
 import { interactionBench } from './lib/interaction-bench';
 import { serverBench, type Row } from './lib/server-bench';
+import { signInBench } from './lib/sign-in-bench';
 
 const FRAME_MS = 1000 / 60;
 const SECONDS = 1;
@@ -79,7 +80,7 @@ console.log(`  mean calculateRun:  ${fmt(meanMs, 4)} ms vs a ${fmt(FRAME_MS, 1)}
 console.log(`  (checksums ${fmt(engine.sink % 1000, 3)} / ${fmt(bare.sink % 1000, 3)})`);
 
 function printTable(rows: Row[]) {
-  const value = (r: Row, x: number) => (r.unit === 'ms' ? `${fmt(x, 1)} ms` : `${fmt(x)} req/s`);
+  const value = (r: Row, x: number) => (r.unit === 'ms' ? `${fmt(x, 1)} ms` : r.unit === 'KB' ? `${fmt(x)} KB` : `${fmt(x)} req/s`);
   console.log('');
   console.log('| figure | product | floor | ratio | goal | note |');
   console.log('|---|---|---|---|---|---|');
@@ -94,6 +95,11 @@ async function main() {
     printTable(await serverBench((line) => console.log(line)));
     return;
   }
+  // BENCH_ONLY=sign-in: just the sign-in screen's JavaScript and cold load against a bare Expo Router app.
+  if (process.env.BENCH_ONLY === 'sign-in') {
+    printTable(await signInBench(path.join(__dirname, '..', 'dist'), (line) => console.log(line)));
+    return;
+  }
   const b = await importBench();
   const ms = (x: number) => `${fmt(x, 1)} ms`;
   console.log('');
@@ -106,9 +112,11 @@ async function main() {
   console.log('Server against its floors (issue 12), each server in its own process, keep-alive client, 8 in flight');
   const rows = await serverBench((line) => console.log(line));
   // Chromium on the last web build (`npm run build:web`); skipped when there is none.
-  const ui = await interactionBench(path.join(__dirname, '..', 'dist'));
-  if (ui.length === 0) console.log('  (no web build in dist/: interaction rows skipped; run npm run build:web first)');
-  printTable([...rows, ...ui]);
+  const webDir = path.join(__dirname, '..', 'dist');
+  const ui = await interactionBench(webDir);
+  const signIn = await signInBench(webDir, (line) => console.log(line));
+  if (ui.length === 0) console.log('  (no web build in dist/: interaction and sign-in rows skipped; run npm run build:web first)');
+  printTable([...rows, ...signIn, ...ui]);
 }
 
 void main().then(() => process.exit(0));

@@ -1,18 +1,21 @@
 /**
  * A server for the bench, in its own process so the load client does not share its thread:
  * `product <database file> [fresh] [web dir]` runs the real app on that database (serving the web build when given); `floor` is bare Express that
- * answers each registered path with fixed bytes (parsing a JSON body first where asked).
+ * answers each registered path with fixed bytes (parsing a JSON body first where asked); `static <web dir>` is bare Express with the
+ * product's compression serving another web export (the floor of the sign-in rows).
  * Talks to the parent over IPC: it sends { port }, and answers { memory } to 'memory'.
  */
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import type { AddressInfo } from 'node:net';
+import compression from 'compression';
 import express from 'express';
 import { createApp } from '../../server/app';
 import { openDatabase } from '../../server/db/data-source';
 import { Mailer } from '../../server/mail/mailer';
 import { seed } from '../../server/seed/seed';
+import { webApp } from '../../server/web/web-app';
 
 export interface FloorRoute {
   method: 'get' | 'post';
@@ -57,6 +60,14 @@ function floor() {
   listen(app);
 }
 
+function staticFloor(webDir: string) {
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(compression());
+  app.use(webApp(webDir));
+  listen(app);
+}
+
 process.on('SIGINT', () => process.exit(0));
 process.on('SIGTERM', () => process.exit(0));
 process.on('message', (msg: Message) => {
@@ -69,4 +80,5 @@ process.on('message', (msg: Message) => {
 
 const [mode, file, fresh, webDir] = process.argv.slice(2);
 if (mode === 'product') void product(file, fresh === 'fresh', webDir);
+else if (mode === 'static') staticFloor(file);
 else floor();

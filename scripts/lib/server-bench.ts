@@ -8,7 +8,7 @@ export interface Row {
   figure: string;
   product: number;
   floor: number;
-  unit: 'req/s' | 'ms';
+  unit: 'req/s' | 'ms' | 'KB';
   goal: string;
   note?: string;
 }

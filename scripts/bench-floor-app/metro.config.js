@@ -1,0 +1,10 @@
+// The floor app has no node_modules of its own: Metro watches and resolves from the repository's.
+const path = require('node:path');
+const { getDefaultConfig } = require('expo/metro-config');
+
+const repoRoot = path.resolve(__dirname, '..', '..');
+const config = getDefaultConfig(__dirname);
+config.watchFolders = [repoRoot];
+config.resolver.nodeModulesPaths = [path.join(repoRoot, 'node_modules')];
+
+module.exports = config;
