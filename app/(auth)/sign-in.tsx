@@ -1,3 +1,4 @@
+import { useEffect } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { SignInForm } from '../../components/auth/sign-in-form';
 import { Card } from '../../components/ui/card';
@@ -7,6 +8,10 @@ import { colors, radii, spacing } from '../../constants/theme';
 import { isApiError, messageOf } from '../../hooks/api-client';
 import { useSignInMutation } from '../../hooks/use-session';
 import { useScreenTitle } from '../../components/ui/use-screen-title';
+import { loadScreens } from '../../components/screens/lazy-screen';
+
+/** Once the form is up, the signed-in screens are fetched in the background, so signing in opens the home at once. */
+const PREFETCH_AFTER_MS = 800;
 
 export default function SignInScreen() {
   const signIn = useSignInMutation();
@@ -17,6 +22,10 @@ export default function SignInScreen() {
   const failure = error && !hasFieldErrors ? messageOf(error) : undefined;
 
   useScreenTitle('Sign in');
+  useEffect(() => {
+    const timer = setTimeout(() => loadScreens().catch(() => undefined), PREFETCH_AFTER_MS);
+    return () => clearTimeout(timer);
+  }, []);
   return (
     <Screen narrow>
       <View style={styles.brand}>
