@@ -85,6 +85,8 @@ async function fabricatorWorkspace(size: 'phone' | 'desktop', viewport: { width:
 
   for (const [i, run] of RUNS.entries()) await addRun(page, jobName, run, i === 0);
   const runs = page.getByRole('list', { name: 'Runs' }).getByRole('article');
+  // The job page may first show its cached answer from before the last save, then the fresh one.
+  await runs.nth(2).waitFor();
   expect(await runs.count()).toBe(3);
   expect(await runs.nth(0).innerText()).toContain('Type 321 (S32100)');
   expect(await runs.nth(2).innerText()).toContain('Tailpipe');
