@@ -19,9 +19,9 @@ function remembered(): UnitSystem | null {
 
 /**
  * The units the customer reads their quote in, without an account: remembered in this browser,
- * else metric.
+ * else the units of whoever prepared the quote.
  */
-export function useCustomerUnits(): [UnitSystem, (units: UnitSystem) => void] {
+export function useCustomerUnits(preparedIn: UnitSystem): [UnitSystem, (units: UnitSystem) => void] {
   const [chosen, setChosen] = useState<UnitSystem | null>(remembered);
   const choose = useCallback((units: UnitSystem) => {
     setChosen(units);
@@ -31,5 +31,5 @@ export function useCustomerUnits(): [UnitSystem, (units: UnitSystem) => void] {
       // A browser that refuses storage (private mode) still switches for this visit.
     }
   }, []);
-  return [chosen ?? 'metric', choose];
+  return [chosen ?? preparedIn, choose];
 }

@@ -146,14 +146,15 @@ export function createApp(dataSource: DataSource, options: AppOptions) {
   api.use(jobsRouter(jobsService));
   api.use(weldPlanRouter(new WeldPlanService(jobsService, catalogueService, flexPartsService, weldRules)));
   api.use('/weld-rules', weldRulesRouter(weldRules));
-  const quotes = new QuotesService(new QuotesStore(dataSource), new JobsStore(dataSource), catalogueService, shopSettings, usersRepository, options.mailer, currencyRates, deposits);
+  const preferences = new PreferencesService(new PreferencesRepository(dataSource));
+  const quotes = new QuotesService(new QuotesStore(dataSource), new JobsStore(dataSource), catalogueService, shopSettings, usersRepository, options.mailer, currencyRates, deposits, preferences);
   api.use('/currency-rates', currencyRatesRouter(currencyRates));
   api.use('/settings', shopSettingsRouter(shopSettings));
   api.use('/quotes', quotesRouter(quotes, options.publicUrl));
   api.use(depositsRouter(deposits, options.publicUrl));
   api.use('/public', ...publicLimiters({ ...DEFAULT_PUBLIC_LIMITS, ...options.publicLimits }, counters), publicQuotesRouter(quotes, options.publicUrl), publicDepositRouter(deposits, options.publicUrl));
   api.use('/outbox', outboxRouter(new OutboxRepository(dataSource)));
-  api.use('/me', preferencesRouter(new PreferencesService(new PreferencesRepository(dataSource))));
+  api.use('/me', preferencesRouter(preferences));
   api.use(catalogueRouter(catalogueService, new CatalogueCsvService(catalogueService, catalogueStore, new ImportJobs(new ImportJobRepository(dataSource))), new CatalogueReviewService(catalogueStore, catalogueService), new CatalogueVersionsService(catalogueStore, catalogueService)));
   api.use(apiNotFound);
   api.use(errorHandler);

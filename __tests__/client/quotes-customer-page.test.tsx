@@ -39,6 +39,7 @@ const quote: PublicQuoteView = {
   status: 'viewed',
   currency: 'EUR',
   acceptedOptionIndex: null,
+  units: 'metric',
   options: [option('Type 321 throughout', 400, 'S32100'), option('Type 347 throughout', 450, 'S34700')],
 };
 
@@ -83,6 +84,18 @@ describe('the customer’s quote page', () => {
     expect(onDecide).toHaveBeenCalledWith({ accept: false, name: 'Ria Thorn', reason: 'Went with a rebuild' });
     expect(await screen.findByRole('alert')).toHaveTextContent(/already accepted\. Nothing more is needed from you\./);
     expect(screen.getByLabelText('Reason (optional)').props.value).toBe('Went with a rebuild');
+  });
+
+  it('when the salesperson works in imperial and the customer has not chosen, then the quote opens in °F', () => {
+    // 870 °C = 870 × 9/5 + 32 = 1598 °F (the definition of the Fahrenheit scale).
+    render(<PublicQuotePage quote={{ ...quote, units: 'imperial' }} onDecide={jest.fn()} />);
+    expect(screen.getAllByText(/1,?598 °F/).length).toBeGreaterThan(0);
+    expect(screen.queryByText(/870 °C/)).toBeNull();
+  });
+
+  it('when the salesperson works in metric, then the quote opens in °C', () => {
+    render(<PublicQuotePage quote={quote} onDecide={jest.fn()} />);
+    expect(screen.getAllByText(/870 °C/).length).toBeGreaterThan(0);
   });
 
   it('when the quote is accepted, then the page says which option and offers no more buttons', () => {

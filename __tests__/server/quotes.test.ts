@@ -92,6 +92,21 @@ describe('building and sending a quote', () => {
     expect((await sales.patch(`/api/quotes/${quote.id}`).send({ message: 'x' })).status).toBe(409);
   });
 
+  it('when the salesperson works in imperial, then the customer’s link opens in imperial', async () => {
+    const sales = await signedIn(t.app, 'sales');
+    expect((await sales.put('/api/me/preferences').send({ unitSystem: 'imperial' })).status).toBe(200);
+    try {
+      const quote = await draftQuote(sales);
+      await sales.post(`/api/quotes/${quote.id}/send`).send({});
+      const token = await tokenFromOutbox(sales, 'oda@example.test');
+      const opened = await client(t.app).get(`/api/public/quotes/${token}`);
+      expect(opened.status).toBe(200);
+      expect(opened.body.quote.units).toBe('imperial');
+    } finally {
+      await sales.put('/api/me/preferences').send({ unitSystem: 'metric' });
+    }
+  });
+
   it('when the customer opens the link and accepts option 2, then sales sees accepted and gets an e-mail', async () => {
     const sales = await signedIn(t.app, 'sales');
     const quote = await draftQuote(sales);
@@ -105,6 +120,7 @@ describe('building and sending a quote', () => {
     expect(wordPhrase(opened.body.quote.options[1].alloys[0].plainWords, 'metric')).toMatch(/Alloy 625.*°C in air/);
     expect(JSON.stringify(opened.body)).not.toMatch(/customerEmail|labourRate|createdBy|tokenHash/);
     expect((await sales.get(`/api/quotes/${quote.id}`)).body.quote.status).toBe('viewed');
+    expect(opened.body.quote.units).toBe('metric'); // the salesperson never chose imperial
 
     const accepted = await customer.post(`/api/public/quotes/${token}/accept`).send({ optionIndex: 1, name: 'Oda Kallstrom' });
     expect(accepted.status).toBe(200);

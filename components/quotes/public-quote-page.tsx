@@ -27,7 +27,7 @@ export function PublicQuotePage({ quote, onDecide, depositSection }: PublicQuote
   const [step, setStep] = useState<Step>({ kind: 'choosing' });
   const [decidedBy, setDecidedBy] = useState<string>();
   const open = quote.status === 'sent' || quote.status === 'viewed';
-  const [units, setUnits] = useCustomerUnits();
+  const [units, setUnits] = useCustomerUnits(quote.units);
 
   return (
     <View style={styles.page}>

@@ -5,6 +5,9 @@ import { compareWithFirst, priceOption, type PricedAlloy, type PricedRunInput } 
 import type { PublicUser } from '../../shared/schemas/auth';
 import { optionKey, optionLimitState } from '../../shared/quotes/limit-cautions';
 import { overridesInForce, requireOverrides } from './limit-overrides';
+import { DEFAULT_PREFERENCES } from '../../shared/schemas/preferences';
+import type { UnitSystem } from '../../shared/units';
+import type { PreferencesService } from '../preferences/preferences.service';
 import type { LimitOverrideInput, PublicQuoteView, QuoteInput, QuotePricing, QuoteStatus, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
 import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
 import type { CurrencyRatesService } from '../currency/currency-rates.service';
@@ -46,7 +49,14 @@ export class QuotesService {
     private readonly mailer: Mailer,
     private readonly currencyRates?: CurrencyRatesService,
     private readonly deposits?: DepositViews,
+    private readonly preferences?: PreferencesService,
   ) {}
+
+  /** The customer first reads the quote in the units of whoever prepared it. */
+  private async unitsOf(quote: Quote): Promise<UnitSystem> {
+    if (!this.preferences || !quote.createdBy) return DEFAULT_PREFERENCES.unitSystem;
+    return (await this.preferences.get(quote.createdBy)).unitSystem;
+  }
 
   private depositOf(quote: Quote): Promise<DepositView | null> {
     return this.deposits ? this.deposits.viewOf(quote) : Promise.resolve(null);
@@ -352,6 +362,7 @@ export class QuotesService {
       status: quote.status,
       currency: pricing.currency,
       acceptedOptionIndex: quote.acceptedOptionIndex,
+      units: await this.unitsOf(quote),
       deposit: await this.depositOf(quote),
       options: publicOptions(pricing),
     };

@@ -4,7 +4,7 @@ import type { OptionComparison, PricedAlloy, PricedOption, PricedRunInput } from
 import { emailSchema } from './auth';
 import type { OptionLimitState } from '../quotes/limit-cautions';
 import type { DepositView } from './deposits';
-import type { Phrase } from '../units';
+import type { Phrase, UnitSystem } from '../units';
 
 export const QUOTE_STATUSES = ['draft', 'sent', 'viewed', 'accepted', 'declined', 'expired'] as const;
 export type QuoteStatus = (typeof QUOTE_STATUSES)[number];
@@ -146,6 +146,8 @@ export interface PublicQuoteView {
   status: QuoteStatus;
   currency: string;
   acceptedOptionIndex: number | null;
+  /** The units of the person who prepared the quote: what the customer reads until they choose. */
+  units: UnitSystem;
   deposit?: DepositView | null;
   options: {
     label: string;
