@@ -51,12 +51,20 @@ export function useJobsQuery(params: JobListParams, pageSize = 25) {
   return { ...query, items, total: query.data?.pages[0]?.total ?? 0 };
 }
 
+/**
+ * The job, and whether its cached answer is one a write of this browser has made out of date while the
+ * new one is on its way (`settling`). Screens that take defaults from the job or print it wait that out,
+ * so a run added straight after another does not start from the job as it was before.
+ */
 export function useJobQuery(id: string | undefined) {
-  return useQuery({
+  const queryClient = useQueryClient();
+  const query = useQuery({
     queryKey: jobKeys.detail(id ?? ''),
     queryFn: async () => (await api.get<{ job: JobDetail }>(jobPath(id!))).job,
     enabled: Boolean(id),
   });
+  const invalidated = queryClient.getQueryState(jobKeys.detail(id ?? ''))?.isInvalidated ?? false;
+  return { ...query, settling: query.isFetching && invalidated };
 }
 
 export function useCreateJobMutation() {

@@ -30,9 +30,12 @@ const RUNS: RunToAdd[] = [
   { name: 'Tailpipe', lengthMm: '1100', startC: '420', endC: '260' },
 ];
 
-async function addRun(page: Page, jobName: string, run: RunToAdd, chooseAlloy: boolean) {
+async function addRun(page: Page, jobName: string, run: RunToAdd, position: number) {
   await page.getByRole('button', { name: 'Add run', exact: true }).click();
   await page.getByRole('heading', { name: 'New run', level: 1 }).waitFor();
+  // Added straight after the last save, the new run still starts from the job as it is now.
+  expect(await page.getByLabel('Run name', { exact: true }).inputValue()).toBe(`Run ${position}`);
+  const chooseAlloy = position === 1;
   await page.getByLabel('Run name', { exact: true }).fill(run.name);
   if (chooseAlloy) {
     await page.getByLabel('Search alloys', { exact: true }).fill('S32100');
@@ -83,7 +86,7 @@ async function fabricatorWorkspace(size: 'phone' | 'desktop', viewport: { width:
   await page.getByRole('heading', { name: jobName, level: 1 }).waitFor();
   await page.getByText('No runs yet', { exact: true }).waitFor();
 
-  for (const [i, run] of RUNS.entries()) await addRun(page, jobName, run, i === 0);
+  for (const [i, run] of RUNS.entries()) await addRun(page, jobName, run, i + 1);
   const runs = page.getByRole('list', { name: 'Runs' }).getByRole('article');
   // The job page may first show its cached answer from before the last save, then the fresh one.
   await runs.nth(2).waitFor();

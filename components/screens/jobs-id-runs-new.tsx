@@ -26,7 +26,7 @@ export default function NewRunScreen() {
   const create = useCreateRunMutation(id ?? '');
 
   useScreenTitle('New run', job.data?.name);
-  if (job.isPending) return <LoadingState label="Loading the job…" />;
+  if (job.isPending || job.settling) return <LoadingState label="Loading the job…" />;
   if (job.isError) {
     return <LoadFailed title="The job did not load" error={job.error} onRetry={() => void job.refetch()} backHref="/jobs" backLabel="Back to the jobs" />;
   }

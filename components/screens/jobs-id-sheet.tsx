@@ -19,7 +19,7 @@ export default function JobSheetScreen() {
   const job = useJobQuery(id);
 
   useScreenTitle('Job sheet', job.data?.name);
-  if (job.isPending) return <LoadingState label="Loading the job sheet…" />;
+  if (job.isPending || job.settling) return <LoadingState label="Loading the job sheet…" />;
   if (job.isError) {
     return <LoadFailed title="The job sheet did not load" error={job.error} onRetry={() => void job.refetch()} backHref="/jobs" backLabel="Back to the jobs" />;
   }
