@@ -1,4 +1,5 @@
 import type { ApiErrorBody } from '../shared/schemas/api-error';
+import { wordPhrase, type Phrase, type UnitSystem } from '../shared/units';
 
 /** Every way a request can fail, reduced to what the UI needs to decide what to show. */
 export type ApiFailureKind =
@@ -17,6 +18,8 @@ export class ApiError extends Error {
   /** The server's snake_case code, when it sent one (e.g. `email_taken`, `last_admin`). */
   readonly code: string | undefined;
   readonly fields: Record<string, string>;
+  /** The message as words and quantities, when the server sent them. */
+  words?: Phrase;
 
   constructor(kind: ApiFailureKind, message: string, status = 0, code?: string, fields: Record<string, string> = {}) {
     super(message);
@@ -60,8 +63,8 @@ function isErrorBody(value: unknown): value is ApiErrorBody {
 }
 
 /** A readable message for any thrown value, for banners. */
-export function messageOf(error: unknown): string {
-  if (isApiError(error)) return error.message;
+export function messageOf(error: unknown, units: UnitSystem = 'metric'): string {
+  if (isApiError(error)) return error.words ? wordPhrase(error.words, units) : error.message;
   return fallbackMessages.server;
 }
 
@@ -100,8 +103,10 @@ function failureFor(status: number, payload: unknown): ApiError {
   // A refused upload (too large, not a PDF) is something the person can correct.
   const kind = status === 413 || status === 415 ? 'invalid' : kindFor(status);
   if (isErrorBody(payload)) {
-    const { code, message, fields } = payload.error;
-    return new ApiError(kind, message || fallbackMessages[kind], status, code, fields ?? {});
+    const { code, message, fields, words } = payload.error;
+    const failure = new ApiError(kind, message || fallbackMessages[kind], status, code, fields ?? {});
+    if (Array.isArray(words)) failure.words = words;
+    return failure;
   }
   return new ApiError(kind, fallbackMessages[kind], status);
 }

@@ -9,7 +9,8 @@ import { formatQuantity, type QuantityKind, type UnitSystem } from './units';
  * message words it in the reader's units, at the precision of its own quantity.
  */
 // "mm/m" (a growth per length) is not a length, hence the look-ahead.
-const SI_FIGURE = /(-?\d+(?:\.\d+)?) ?(mm|°C)(?![\w/²³])/g;
+// Messages write a negative bound with the minus sign (−50 °C) as often as with a hyphen.
+const SI_FIGURE = /([-−]?\d+(?:\.\d+)?) ?(mm|°C)(?![\w/²³])/g;
 
 const LENGTH_KINDS: readonly QuantityKind[] = ['length', 'smallLength', 'fit'];
 
@@ -22,6 +23,6 @@ export function wordFieldMessage(message: string, system: UnitSystem, fieldKind?
   if (system === 'metric') return message;
   const lengthKind = fieldKind && LENGTH_KINDS.includes(fieldKind) ? fieldKind : 'length';
   return message.replace(SI_FIGURE, (_whole, figure: string, unit: string) =>
-    formatQuantity(unit === 'mm' ? lengthKind : 'temperature', Number(figure), system).text,
+    formatQuantity(unit === 'mm' ? lengthKind : 'temperature', Number(figure.replace('−', '-')), system).text,
   );
 }

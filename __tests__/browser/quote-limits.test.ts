@@ -1,5 +1,5 @@
 import type { APIRequestContext, Browser } from 'playwright-core';
-import { launchBrowser, newPage, pageErrors, PHONE, screenshot, signIn } from './browser';
+import { BASE_URL, launchBrowser, newPage, pageErrors, PHONE, screenshot, signIn } from './browser';
 import { draftQuote, tokenMailedTo } from './quote-fixtures';
 
 let browser: Browser;
@@ -33,6 +33,15 @@ describe('an option over its temperature limit, at 390 px', () => {
     await sales.page.getByRole('button', { name: 'Yes, send it' }).click();
     await sales.page.getByText(/Over its temperature limit: option 2 \(Titanium throughout, 380 °C over\)/).waitFor();
     await screenshot(sales.page, 'quote-limits-2-send-refused');
+    // In imperial the excess is a difference of temperatures: 380 °C × 9/5 = 684 °F (NIST SP 811 §4.2.1.1).
+    const put = (unitSystem: string) => sales.context.request.put('/api/me/preferences', { data: { unitSystem }, headers: { Origin: BASE_URL } });
+    expect((await put('imperial')).status()).toBe(200);
+    await sales.page.reload();
+    await limits.getByText('Option 2, Titanium throughout: 684 °F over its temperature limit').waitFor();
+    await sales.page.getByRole('button', { name: 'Send quote' }).click();
+    await sales.page.getByRole('button', { name: 'Yes, send it' }).click();
+    await sales.page.getByText(/Over its temperature limit: option 2 \(Titanium throughout, 684 °F over\)/).waitFor();
+    expect((await put('metric')).status()).toBe(200);
 
     const engineer = await newPage(browser, PHONE);
     await signIn(engineer.page, 'engineer@dilato.test');

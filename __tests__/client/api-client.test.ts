@@ -1,4 +1,4 @@
-import { api, ApiError } from '../../hooks/api-client';
+import { api, ApiError, messageOf } from '../../hooks/api-client';
 
 function respond(status: number, body?: unknown) {
   global.fetch = jest.fn().mockResolvedValue({
@@ -46,6 +46,15 @@ describe('api client', () => {
 
     const error = await failureOf(api.post('/users', {}));
     expect(error.fields).toEqual({ email: 'Already in use' });
+  });
+
+  it('when the server sends the message as words, then it reads in the reader’s units (a 380 °C excess is 684 °F, NIST SP 811 §4.2.1.1)', async () => {
+    const words = ['Over its limit by ', { kind: 'temperatureDelta', si: 380 }, '.'];
+    respond(409, { error: { code: 'limit_override_needed', message: 'Over its limit by 380 °C.', words } });
+
+    const error = await failureOf(api.post('/quotes/q1/send', {}));
+    expect(messageOf(error, 'imperial')).toBe('Over its limit by 684 °F.');
+    expect(messageOf(error)).toBe('Over its limit by 380 °C.');
   });
 
   it('when the network is down, then the failure is offline', async () => {

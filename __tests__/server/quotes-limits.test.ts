@@ -58,6 +58,9 @@ describe('options over their temperature limit', () => {
     expect(res.status).toBe(409);
     expectErrorShape(res.body, 'limit_override_needed');
     expect(res.body.error.message).toContain('option 2 (Titanium throughout, 380 °C over)');
+    // The excess is a temperature difference: 380 °C × 9/5 = 684 °F (NIST SP 811, §4.2.1.1), not 716 °F.
+    expect(wordPhrase(res.body.error.words, 'imperial')).toContain('option 2 (Titanium throughout, 684 °F over)');
+    expect(wordPhrase(res.body.error.words, 'metric')).toBe(res.body.error.message);
     expect(res.body.error.fields).toEqual({ 'options.1.alloyId': 'Over its temperature limit: needs an override' });
     expect(await mailTo(sales, 'oda@example.test')).toHaveLength(0);
     expect((await sales.get(`/api/quotes/${quote.id}`)).body.quote.status).toBe('draft');

@@ -109,6 +109,6 @@ export function expectErrorShape(body: unknown, code: string) {
     error: expect.objectContaining({ code, message: expect.any(String) }),
   });
   const error = (body as { error: Record<string, unknown> }).error;
-  expect(Object.keys(error).every((k) => ['code', 'message', 'fields'].includes(k))).toBe(true);
+  expect(Object.keys(error).every((k) => ['code', 'message', 'fields', 'words'].includes(k))).toBe(true);
   expect(error.code).toMatch(/^[a-z][a-z0-9_]*$/);
 }

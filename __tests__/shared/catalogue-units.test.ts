@@ -70,6 +70,11 @@ describe('field messages in the reader units', () => {
     );
   });
 
+  it('when a bound below zero is written with the minus sign, then it keeps its sign in °F (−50 °C × 9/5 + 32 = −58 °F, NIST SP 811 §4.2.1.1)', () => {
+    expect(wordFieldMessage('At least −50 °C, the lowest the calculator handles', 'imperial', 'temperature')).toBe('At least -58 °F, the lowest the calculator handles');
+    expect(wordFieldMessage('Below -50 °C', 'imperial', 'temperature')).toBe('Below -58 °F');
+  });
+
   it('when the reader is metric or the text names no SI figure, then the message is unchanged', () => {
     expect(wordFieldMessage('Outside diameter must be at most 2000 mm', 'metric', 'length')).toBe('Outside diameter must be at most 2000 mm');
     expect(wordFieldMessage('Enter a number', 'imperial', 'length')).toBe('Enter a number');

@@ -1,3 +1,4 @@
+import { wordFieldMessage } from '../../shared/field-messages';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '../../constants/theme';
 import { fixedPointLabel } from '../../shared/jobs/fixed-points';
@@ -67,7 +68,7 @@ function SheetRun({ run, units }: { run: RunView; units: UnitSystem }) {
       <Row label="Tube to cut" value={cutLine(run, units)} />
       <Row label="Ends" value={`${fixedPointLabel(run.startFixing)} to ${fixedPointLabel(run.endFixing)}`} />
       <Row label="Temperatures" value={`install ${show('temperature', run.installTempC, units)}; ${temps}; peak ${show('temperature', runPeak(run), units)}`} />
-      <Row label="Growth" value={run.result ? show('smallLength', run.result.growthMm, units) : (run.problem?.message ?? '—')} />
+      <Row label="Growth" value={run.result ? show('smallLength', run.result.growthMm, units) : (run.problem ? wordFieldMessage(run.problem.message, units) : '—')} />
       <Row label="Joint" value={jointLine(run, units)} />
       {run.result ? <Row label="Stress if nothing gave" value={stressLine(stressFigure(run.result.restraint), units)} /> : null}
       <Row label="Verdict" value={runVerdicts(run).map((v) => v.label).join(', ') || '—'} />

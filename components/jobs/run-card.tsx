@@ -1,3 +1,4 @@
+import { wordFieldMessage } from '../../shared/field-messages';
 import { Link } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
@@ -53,7 +54,7 @@ export function RunCard({ run, jobId, units, actions }: { run: RunView; jobId: s
         <Fact label="Growth" value={run.result ? show('smallLength', run.result.growthMm, units) : '—'} />
       </View>
       <VerdictTags verdicts={runVerdicts(run)} />
-      {run.problem ? <Text tone="danger">{run.problem.message}</Text> : null}
+      {run.problem ? <Text tone="danger">{wordFieldMessage(run.problem.message, units)}</Text> : null}
       {actions ? (
         confirming ? (
           <View style={styles.actions} accessibilityRole="alert">

@@ -5,6 +5,8 @@ import { StyleSheet, View } from 'react-native';
 import type { z } from 'zod';
 import { spacing } from '../../constants/theme';
 import { messageOf } from '../../hooks/api-client';
+import { useUnits } from '../../hooks/use-units';
+import { show } from '../units/format';
 import { useCheckedForm } from '../forms/use-checked-form';
 import { optionLimitState } from '../../shared/quotes/limit-cautions';
 import type { PricedOption } from '../../shared/quotes/pricing';
@@ -26,6 +28,7 @@ export interface LimitOverridePanelProps {
 
 /** Options over or near their temperature limit: what the customer will read, and the override an over-limit option needs before sending. */
 export function LimitOverridePanel({ options, overrides, canOverride, onOverride }: LimitOverridePanelProps) {
+  const units = useUnits();
   const flagged = options.map((o, index) => ({ o, index, state: optionLimitState(o) })).filter((x) => x.state !== 'ok');
   if (flagged.length === 0) return null;
   return (
@@ -43,7 +46,7 @@ export function LimitOverridePanel({ options, overrides, canOverride, onOverride
             <View key={index} style={styles.option} role="group" aria-label={`Option ${index + 1} temperature`}>
               <Text variant="bodyStrong" tone={state === 'over' ? 'danger' : 'warning'}>
                 Option {index + 1}, {o.label}:{' '}
-                {state === 'over' ? `${Math.round(-o.tempMarginC)} °C over its temperature limit` : `only ${Math.round(o.tempMarginC)} °C below its temperature limit`}
+                {state === 'over' ? `${show('temperatureDelta', -o.tempMarginC, units)} over its temperature limit` : `only ${show('temperatureDelta', o.tempMarginC, units)} below its temperature limit`}
               </Text>
               {state === 'over' && override ? (
                 <Text>

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { spacing } from '../../constants/theme';
 import { messageOf } from '../../hooks/api-client';
+import { useUnits } from '../../hooks/use-units';
 import { Button } from '../ui/button';
 import { Card } from '../ui/card';
 import { ErrorBanner } from '../ui/error-banner';
@@ -20,7 +21,9 @@ export interface SendPanelProps {
 export function SendPanel({ number, customerEmail, onSend, disabledReason }: SendPanelProps) {
   const [confirming, setConfirming] = useState(false);
   const [sending, setSending] = useState(false);
-  const [failure, setFailure] = useState<string>();
+  // The refusal itself, so its temperatures follow a unit switch.
+  const [failure, setFailure] = useState<unknown>();
+  const units = useUnits();
 
   const send = async () => {
     setSending(true);
@@ -29,7 +32,7 @@ export function SendPanel({ number, customerEmail, onSend, disabledReason }: Sen
       await onSend();
       setConfirming(false);
     } catch (error) {
-      setFailure(messageOf(error));
+      setFailure(error);
     } finally {
       setSending(false);
     }
@@ -48,7 +51,7 @@ export function SendPanel({ number, customerEmail, onSend, disabledReason }: Sen
           {disabledReason}
         </Text>
       ) : null}
-      {failure ? <ErrorBanner title="The quote was not sent" message={failure} /> : null}
+      {failure ? <ErrorBanner title="The quote was not sent" message={messageOf(failure, units)} /> : null}
       {confirming ? (
         <View style={styles.confirm} accessibilityRole="alert">
           <Text variant="bodyStrong">

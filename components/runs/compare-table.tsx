@@ -1,3 +1,4 @@
+import { wordFieldMessage } from '../../shared/field-messages';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, spacing } from '../../constants/theme';
 import type { CompareRow } from '../../shared/schemas/jobs';
@@ -71,7 +72,7 @@ export function CompareTable({ current, candidates, units, wide, onAdopt, adopti
         {rows.map((row, i) => (
           <View role="listitem" key={row.alloy?.id ?? i}>
             <Card edge={i === 0 ? 'primary' : undefined} role="article" aria-label={nameOf(row)}>
-              <AlloyCell row={row} variant="heading" />
+              <AlloyCell row={row} variant="heading" units={units} />
               <View style={styles.facts}>
                 {cellsOf(row, units).map((c) => (
                   <Fact key={c.label} label={c.label} value={c.value}>
@@ -105,7 +106,7 @@ export function CompareTable({ current, candidates, units, wide, onAdopt, adopti
         return (
           <View key={row.alloy?.id ?? i} role="row" style={[styles.row, i === 0 && styles.currentRow]}>
             <View role="rowheader" style={[styles.cell, styles.nameCell]}>
-              <AlloyCell row={row} variant="bodyStrong" />
+              <AlloyCell row={row} variant="bodyStrong" units={units} />
             </View>
             {cells.length === 0
               ? COLUMNS.slice(1, -1).map((c) => (
@@ -133,7 +134,7 @@ export function CompareTable({ current, candidates, units, wide, onAdopt, adopti
   );
 }
 
-function AlloyCell({ row, variant }: { row: CompareRow; variant: 'heading' | 'bodyStrong' }) {
+function AlloyCell({ row, variant, units }: { row: CompareRow; variant: 'heading' | 'bodyStrong'; units: UnitSystem }) {
   return (
     <>
       <Text variant={variant}>{nameOf(row)}</Text>
@@ -142,7 +143,7 @@ function AlloyCell({ row, variant }: { row: CompareRow; variant: 'heading' | 'bo
           Data version {row.alloy.version}
         </Text>
       ) : null}
-      {row.problem ? <Text tone="danger">{row.problem.message}</Text> : null}
+      {row.problem ? <Text tone="danger">{wordFieldMessage(row.problem.message, units)}</Text> : null}
     </>
   );
 }

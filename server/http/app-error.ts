@@ -1,5 +1,10 @@
+import type { Phrase } from '../../shared/units';
+
 /** The one error services throw; the error middleware turns it into the API's one error shape. */
 export class AppError extends Error {
+  /** The message as a phrase, where it carries measured values (see ApiErrorBody). */
+  words?: Phrase;
+
   constructor(
     readonly status: number,
     readonly code: string,
@@ -8,6 +13,12 @@ export class AppError extends Error {
     readonly headers?: Record<string, string>,
   ) {
     super(message);
+  }
+
+  /** Carries the message's quantities too, so the reader sees them in their own units. */
+  worded(words: Phrase): this {
+    this.words = words;
+    return this;
   }
 
   static badRequest(code: string, message: string, fields?: Record<string, string>) {

@@ -22,7 +22,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (err instanceof AppError) {
     for (const [name, value] of Object.entries(err.headers ?? {})) res.setHeader(name, value);
     send(res, err.status, {
-      error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) },
+      error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}), ...(err.words ? { words: err.words } : {}) },
     });
     return;
   }

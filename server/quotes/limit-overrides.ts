@@ -1,3 +1,4 @@
+import { joinPhrases, phrase, quantity, wordPhrase } from '../../shared/units';
 import { optionKey, optionLimitState } from '../../shared/quotes/limit-cautions';
 import type { LimitOverrideView, QuotePricing } from '../../shared/schemas/quotes';
 import { AppError } from '../http/app-error';
@@ -16,12 +17,16 @@ export async function overridesInForce(repo: QuotesRepository, quote: Quote): Pr
 export function requireOverrides(pricing: QuotePricing, overrides: LimitOverrideView[]): LimitOverrideView[] {
   const missing = pricing.options.map((o, i) => ({ o, i })).filter(({ o, i }) => optionLimitState(o) === 'over' && !overrideFor(overrides, i));
   if (missing.length > 0) {
-    const names = missing.map(({ o, i }) => `option ${i + 1} (${o.label}, ${Math.round(-o.tempMarginC)} °C over)`).join(', ');
+    const names = joinPhrases(
+      missing.map(({ o, i }) => phrase`option ${i + 1} (${o.label}, ${quantity('temperatureDelta', Math.round(-o.tempMarginC))} over)`),
+      ', ',
+    );
+    const words = phrase`Over its temperature limit: ${names}. An engineer or admin must record an override with a reason before the quote can be sent, or change the option.`;
     throw AppError.conflict(
       'limit_override_needed',
-      `Over its temperature limit: ${names}. An engineer or admin must record an override with a reason before the quote can be sent, or change the option.`,
+      wordPhrase(words, 'metric'),
       Object.fromEntries(missing.map(({ i }) => [`options.${i}.alloyId`, 'Over its temperature limit: needs an override'])),
-    );
+    ).worded(words);
   }
   return overrides;
 }
