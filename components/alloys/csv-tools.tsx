@@ -53,7 +53,8 @@ export function CsvTools({ exportHref, importer }: CsvToolsProps) {
       </Text>
       <Text tone="muted">
         One row per property point. Imported alloys become drafts for an admin to publish; rows that do not check out are
-        listed with their line. A file may be up to 8 MB.
+        listed with their line. A file may be up to 8 MB. Its figures are in SI (°C, µm/m·K, GPa, MPa, kg/m³) whatever units you read in,
+        and the report quotes them as the file has them.
       </Text>
       <View style={styles.actions}>
         <DownloadLink href={exportHref} label="Export CSV" accessibilityLabel="Export the catalogue as CSV" />
