@@ -1,6 +1,9 @@
 import { StyleSheet, View } from 'react-native';
 import { colors, spacing } from '../../constants/theme';
 import type { ActivityAction, ActivityChange, ActivityView } from '../../shared/schemas/activity';
+import { useUnits } from '../../hooks/use-units';
+import type { UnitSystem } from '../../shared/units';
+import { wordChange } from './activity-words';
 import { ErrorBanner } from './error-banner';
 import { Text } from './text';
 
@@ -24,23 +27,12 @@ function when(iso: string): string {
   return Number.isNaN(d.getTime()) ? iso : d.toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 }
 
-/** A value as one short line: text as it is, anything structured as compact JSON, cut at 80 characters. */
-function short(value: unknown): string {
-  if (value === null || value === undefined || value === '') return '—';
-  const text = typeof value === 'string' ? value : JSON.stringify(value);
-  return text.length > 80 ? `${text.slice(0, 79)}…` : text;
-}
-
-function ChangeLine({ change }: { change: ActivityChange }) {
-  return (
-    <Text variant="caption">
-      {change.path}: {short(change.before)} → {short(change.after)}
-    </Text>
-  );
+function ChangeLine({ change, units }: { change: ActivityChange; units: UnitSystem }) {
+  return <Text variant="caption">{wordChange(change, units)}</Text>;
 }
 
 /** Who changed what, newest first, with the fields each change touched. */
-export function ActivityList({ items, label }: { items: ActivityView[]; label: string }) {
+export function ActivityList({ items, label, units = 'metric' }: { items: ActivityView[]; label: string; units?: UnitSystem }) {
   if (items.length === 0) return <Text tone="muted">Nothing recorded yet.</Text>;
   return (
     <View role="list" aria-label={label} style={styles.list}>
@@ -52,7 +44,7 @@ export function ActivityList({ items, label }: { items: ActivityView[]; label: s
           <Text variant="caption" tone="muted">
             {when(a.at)} · {a.by ?? 'unknown'}
           </Text>
-          {a.action === 'deleted' ? null : a.changes.slice(0, SHOWN_CHANGES).map((c) => <ChangeLine key={c.path} change={c} />)}
+          {a.action === 'deleted' ? null : a.changes.slice(0, SHOWN_CHANGES).map((c) => <ChangeLine key={c.path} change={c} units={units} />)}
           {a.action !== 'deleted' && a.changes.length > SHOWN_CHANGES ? (
             <Text variant="caption" tone="muted">
               …and {a.changes.length - SHOWN_CHANGES} more fields
@@ -66,6 +58,7 @@ export function ActivityList({ items, label }: { items: ActivityView[]; label: s
 
 /** The list as a page section: loading, failed (with a retry) or the entries. */
 export function ActivitySection({ title = 'Activity', intro, query }: { title?: string; intro: string; query: { data?: ActivityView[]; error: unknown; refetch: () => unknown } }) {
+  const units = useUnits();
   return (
     <View style={styles.section}>
       <Text variant="heading" headingLevel={2}>
@@ -73,7 +66,7 @@ export function ActivitySection({ title = 'Activity', intro, query }: { title?: 
       </Text>
       <Text tone="muted">{intro}</Text>
       {query.data ? (
-        <ActivityList items={query.data} label={title} />
+        <ActivityList items={query.data} label={title} units={units} />
       ) : query.error ? (
         <ErrorBanner title="The activity did not load" message="Try again in a moment." onRetry={() => void query.refetch()} />
       ) : (
