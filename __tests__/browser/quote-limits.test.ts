@@ -66,7 +66,7 @@ describe('an option over its temperature limit, at 390 px', () => {
     await engineer.context.close();
 
     await sales.page.reload();
-    await sales.page.getByText(/^Limit override for option 2 \(Titanium throughout, 380 °C over\)/).waitFor();
+    await sales.page.getByText(/^Limit override for option 2 \(Titanium throughout, 380 °C \/ 684 °F over\)/).waitFor();
     await sales.page.getByRole('button', { name: 'Send quote' }).click();
     await sales.page.getByRole('button', { name: 'Yes, send it' }).click();
     await sales.page.getByText('Sent', { exact: true }).first().waitFor();

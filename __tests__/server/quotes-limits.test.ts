@@ -86,7 +86,8 @@ describe('options over their temperature limit', () => {
     expect(done.status).toBe(201);
     const view = done.body.quote as QuoteView;
     expect(view.limitOverrides).toEqual([{ optionIndex: 1, reason, by: 'Tomas Lindqvist-Oyelaran', at: expect.any(String) }]);
-    expect(view.events.at(-1)).toMatchObject({ status: 'draft', by: 'Tomas Lindqvist-Oyelaran', note: `Limit override for option 2 (Titanium throughout, 380 °C over): ${reason}` });
+    // 380 °C as a difference is 684 °F (× 9/5, NIST SP 811 §4.2.1.1).
+    expect(view.events.at(-1)).toMatchObject({ status: 'draft', by: 'Tomas Lindqvist-Oyelaran', note: `Limit override for option 2 (Titanium throughout, 380 °C / 684 °F over): ${reason}` });
     const activity = (await sales.get(`/api/quotes/${quote.id}/activity`)).body.items as { action: string }[];
     expect(activity.map((a) => a.action)).toContain('limit_overridden');
     const stored = await t.dataSource.query('SELECT option_index, reason, by_name FROM quote_limit_override');

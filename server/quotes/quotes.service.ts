@@ -6,7 +6,7 @@ import type { PublicUser } from '../../shared/schemas/auth';
 import { optionKey, optionLimitState } from '../../shared/quotes/limit-cautions';
 import { overridesInForce, requireOverrides } from './limit-overrides';
 import { DEFAULT_PREFERENCES } from '../../shared/schemas/preferences';
-import type { UnitSystem } from '../../shared/units';
+import { formatQuantity, type UnitSystem } from '../../shared/units';
 import type { PreferencesService } from '../preferences/preferences.service';
 import type { LimitOverrideInput, PublicQuoteView, QuoteInput, QuotePricing, QuoteStatus, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
 import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
@@ -232,8 +232,10 @@ export class QuotesService {
       await repo.putLimitOverride(
         Object.assign(new QuoteLimitOverride(), { id: randomUUID(), quoteId: id, optionIndex: input.optionIndex, optionKey: optionKey(spec), reason: input.reason, byUserId: actor.id, byName: actor.name, at }),
       );
-      const over = Math.round(-priced.tempMarginC);
-      await repo.addEvent({ id: randomUUID(), quoteId: id, status: 'draft', note: `Limit override for option ${input.optionIndex + 1} (${spec.label}, ${over} °C over): ${input.reason}`, by: actor.name, at });
+      // The history keeps a recorded sentence, so it states the excess in both systems for every reader.
+      const over = (system: UnitSystem) => formatQuantity('temperatureDelta', -priced.tempMarginC, system).text;
+      const note = `Limit override for option ${input.optionIndex + 1} (${spec.label}, ${over('metric')} / ${over('imperial')} over): ${input.reason}`;
+      await repo.addEvent({ id: randomUUID(), quoteId: id, status: 'draft', note, by: actor.name, at });
       await repo.activity.add(
         { subject: 'quote', subjectId: id, subjectName: quote.number, jobId: null, action: 'limit_overridden', changes: [{ path: `options.${input.optionIndex}.limitOverride`, before: null, after: input.reason }] },
         actor,
