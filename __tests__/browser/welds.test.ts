@@ -68,6 +68,7 @@ describe('the weld plan', () => {
     await page.getByRole('heading', { name: / home$/ }).waitFor();
     await page.goto('/weld-rules');
     await page.getByRole('heading', { name: 'Weld rules', level: 1 }).waitFor();
+    await page.waitForFunction(() => document.title === 'Weld rules · Dilato');
     await page.getByLabel('Find a rule').fill('S32100');
     const rule = page.getByRole('article', { name: 'ER347: S32100, S32109, S34700 to S32100, S32109, S34700' });
     expect(await rule.innerText()).toMatch(/Source: AWS A5\.9/);

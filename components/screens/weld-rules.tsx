@@ -13,12 +13,14 @@ import { messageOf } from '../../hooks/api-client';
 import { useSessionQuery } from '../../hooks/use-session';
 import { useCreateWeldRuleMutation, useWeldRulesQuery } from '../../hooks/use-weld-rules';
 import { WPS_CAUTION } from '../../shared/welds/weld-pairing';
+import { useScreenTitle } from '../ui/use-screen-title';
 
 export default function WeldRulesScreen() {
   const { data: me } = useSessionQuery();
   const rules = useWeldRulesQuery();
   const create = useCreateWeldRuleMutation();
   const [search, setSearch] = useState('');
+  useScreenTitle('Weld rules');
 
   if (!me) return <LoadingState />;
   const canEdit = me.role === 'engineer' || me.role === 'admin';
