@@ -46,7 +46,7 @@ describe('POST /api/calc/run', () => {
   });
 
   it('when 1 m of 304 goes from 20 to 800 °C with inline EN data, then it grows 14.848 mm (EN 1993-1-2 Annex C)', async () => {
-    const res = await (await signedIn(t.app, 'fabricator')).post('/api/calc/run').send(body());
+    const res = await (await signedIn(t.app, 'fabricator')).post('/api/calc/run').query({ include: 'curves' }).send(body());
     expect(res.status).toBe(200);
     // Check value from EN 1993-1-2 Annex C at 800 °C: Δl/l = 14.84845e-3 (reference-data §1.1).
     expect(res.body.growthMm).toBeCloseTo(14.848, 2);
@@ -59,6 +59,27 @@ describe('POST /api/calc/run', () => {
     expect(res.body.materialCost).toBeCloseTo(3.0933 * 5.2, 2);
     expect(res.body.alloy).toBeNull();
     expect(res.body.warnings.map((w: { code: string }) => w.code)).toEqual(expect.any(Array));
+  });
+
+  it('when asked plainly, then the answer carries the growth curve at a drawing\'s resolution, ending at the same growth, and no growth-per-metre curve or flex candidates', async () => {
+    const fab = await signedIn(t.app, 'fabricator');
+    const run = body({ segments: [{ lengthMm: 1000, startTempC: 800, endTempC: 300 }], flex: {} });
+    const plain = await fab.post('/api/calc/run').send(run);
+    const full = await fab.post('/api/calc/run').query({ include: 'curves' }).send(run);
+    expect(plain.status).toBe(200);
+    expect(plain.body.growthMm).toBe(full.body.growthMm);
+    expect(plain.body.curve.length).toBeLessThanOrEqual(30);
+    expect(plain.body.curve.length).toBeLessThan(full.body.curve.length);
+    expect(plain.body.curve.at(-1).growthMm).toBeCloseTo(full.body.growthMm, 3);
+    expect(plain.body.growthPerMetreCurve).toEqual([]);
+    expect(full.body.growthPerMetreCurve.length).toBeGreaterThan(10);
+    expect(plain.body.flex.candidates).toEqual([]);
+    expect(full.body.flex.candidates.length).toBeGreaterThan(0);
+    expect(plain.body.flex.chosen).toEqual(full.body.flex.chosen);
+    expect(JSON.stringify(plain.body).length).toBeLessThan(JSON.stringify(full.body).length / 2);
+    const bad = await fab.post('/api/calc/run').query({ include: 'everything' }).send(run);
+    expect(bad.status).toBe(400);
+    expectErrorShape(bad.body, 'invalid_query');
   });
 
   it('when the alloy comes from the catalogue, then its published table is used and its version is named', async () => {

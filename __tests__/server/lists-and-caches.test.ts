@@ -241,7 +241,7 @@ describe('published data cached in each instance', () => {
     const eng = await otherSignedIn('engineer');
     const s321 = await alloyId(t, 'S32100');
     const body = { ...calcBody(s321), segments: [{ lengthMm: 1500, startTempC: 700, endTempC: 700 }], flex: {} };
-    const offered = async () => ((await eng.post('/api/calc/run').send(body)).body.flex.candidates as { name: string }[]).some((c) => c.name.includes('Cache test bellows'));
+    const offered = async () => ((await eng.post('/api/calc/run').query({ include: 'curves' }).send(body)).body.flex.candidates as { name: string }[]).some((c) => c.name.includes('Cache test bellows'));
     expect(await offered()).toBe(false);
     const admin = await signedIn(t.app, 'admin');
     const part = await admin.post('/api/flex-parts').send({

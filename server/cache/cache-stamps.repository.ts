@@ -1,4 +1,5 @@
 import type { EntityManager } from 'typeorm';
+import { rawRows } from '../db/raw-sql';
 import { CacheStamp } from './cache-stamp.entity';
 
 export type StampName = 'catalogue' | 'flex_parts';
@@ -8,8 +9,8 @@ export class CacheStamps {
   constructor(private readonly m: EntityManager) {}
 
   async read(name: StampName): Promise<number> {
-    const row = await this.m.findOne(CacheStamp, { where: { name }, select: { stamp: true } });
-    return row?.stamp ?? 0;
+    const [row] = await rawRows<{ stamp: number | string }>(this.m, 'SELECT stamp FROM cache_stamp WHERE name = ?', [name]);
+    return row ? Number(row.stamp) : 0;
   }
 
   async bump(name: StampName): Promise<void> {

@@ -1,6 +1,7 @@
 import { calculateRun, isEngineInputError, type CalcRunRequest, type RunResult } from '../../shared/schemas/calc';
 import type { AlloyData } from '../../shared/engine/types';
 import { AppError } from '../http/app-error';
+import { briefResult } from '../jobs/brief-results';
 import type { CatalogueService } from '../catalogue/catalogue.service';
 import type { FlexPartsService } from '../flex-parts/flex-parts.service';
 import type { ShopSettingsService } from '../settings/shop-settings.service';
@@ -34,7 +35,8 @@ export class CalcService {
     }
   }
 
-  async run(body: CalcRunRequest): Promise<CalcResponse> {
+  /** The run's result; unless `full`, at a drawing's resolution without the growth-per-metre curve or flex candidates. */
+  async run(body: CalcRunRequest, full = false): Promise<CalcResponse> {
     let alloy: AlloyData;
     let used: AlloyUsed | null = null;
     if (body.alloyId) {
@@ -52,7 +54,8 @@ export class CalcService {
     const flexParts = body.flex && !body.flex.parts ? await this.flexParts.forSizing() : undefined;
     const design = designBasisOf(await this.settings.get());
     try {
-      return { ...calculateRun(body, alloy, { flexParts, slipAlloys, design }), alloy: used };
+      const result = calculateRun(body, alloy, { flexParts, slipAlloys, design });
+      return { ...(full ? result : briefResult(result)), alloy: used };
     } catch (err) {
       if (isEngineInputError(err)) throw AppError.badRequest('invalid_input', 'Some values are outside what the data covers.', err.fields);
       throw err;

@@ -12,6 +12,13 @@ export function parseBody<S extends z.ZodType>(schema: S, body: unknown): z.outp
   return result.data;
 }
 
+/** A query string, refused with 400 `invalid_query` and a message per parameter. */
+export function parseQuery<S extends z.ZodType>(schema: S, query: unknown): z.output<S> {
+  const parsed = schema.safeParse(query);
+  if (!parsed.success) throw AppError.badRequest('invalid_query', 'Some filters are not valid.', fieldsFromZodError(parsed.error));
+  return parsed.data;
+}
+
 /**
  * A PATCH body: parsed like any other, then cut down to the top-level fields the request named,
  * so that defaults in the schema (e.g. `active: true`) never reset what the caller left out.

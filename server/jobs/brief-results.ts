@@ -1,4 +1,4 @@
-import type { CurvePoint } from '../../shared/engine/types';
+import type { CurvePoint, RunResult } from '../../shared/engine/types';
 import type { RunView } from '../../shared/schemas/jobs';
 
 /** About as many points along a run as the job page's drawing can show apart. */
@@ -18,19 +18,19 @@ export function drawnCurve(curve: CurvePoint[]): CurvePoint[] {
 }
 
 /**
- * A run as the job page draws it: the growth curve at the drawing's resolution, without the
- * growth-per-metre curve or every flex candidate, which only the run's own page shows.
+ * A result as a drawing shows it: the growth curve at the drawing's resolution, without the
+ * growth-per-metre curve or every flex candidate (the chosen part stays).
  */
-export function briefRun(run: RunView): RunView {
-  if (!run.result) return run;
-  const { result } = run;
+export function briefResult<R extends RunResult>(result: R): R {
   return {
-    ...run,
-    result: {
-      ...result,
-      curve: drawnCurve(result.curve),
-      growthPerMetreCurve: [],
-      ...(result.flex ? { flex: { ...result.flex, candidates: [] } } : {}),
-    },
+    ...result,
+    curve: drawnCurve(result.curve),
+    growthPerMetreCurve: [],
+    ...(result.flex ? { flex: { ...result.flex, candidates: [] } } : {}),
   };
+}
+
+/** A run as the job page draws it; only the run's own page shows the full curves and candidates. */
+export function briefRun(run: RunView): RunView {
+  return run.result ? { ...run, result: briefResult(run.result) } : run;
 }

@@ -11,15 +11,8 @@ import {
 } from '../../shared/schemas/jobs';
 import { currentUser, requireRole, requireSignedIn } from '../auth/session';
 import { AppError } from '../http/app-error';
-import { fieldsFromZod, parseBody, parsePatch } from '../http/validate';
-import type { z } from 'zod';
+import { parseBody, parsePatch, parseQuery } from '../http/validate';
 import type { JobsService } from './jobs.service';
-
-function parseQuery<S extends z.ZodType>(schema: S, query: unknown): z.output<S> {
-  const parsed = schema.safeParse(query);
-  if (!parsed.success) throw AppError.badRequest('invalid_query', 'Some filters are not valid.', fieldsFromZod(parsed.error));
-  return parsed.data;
-}
 
 /** Jobs and their runs: every signed-in role reads (sales quotes from them); the shop floor and engineering write. */
 export function jobsRouter(service: JobsService): Router {

@@ -8,7 +8,7 @@ import type { CurrencyRatesService } from '../currency/currency-rates.service';
 import type { FlexPartsService } from '../flex-parts/flex-parts.service';
 import { AppError } from '../http/app-error';
 import type { ShopSettingsService } from '../settings/shop-settings.service';
-import { designBasisOf, systemBasisOf } from '../../shared/schemas/shop-settings';
+import { designBasisOf, systemBasisOf, type ShopSettings } from '../../shared/schemas/shop-settings';
 import type { SystemBasis } from '../../shared/jobs/system-basis';
 
 /** What the catalogue says about an alloy id right now. */
@@ -36,6 +36,7 @@ export class ResultSession {
   private flexParts: Promise<{ stamp: number; parts: FlexPart[] }> | null = null;
   private design: Promise<DesignBasis> | null = null;
   private rates: ReturnType<CurrencyRatesService['converter']> | null = null;
+  private shopSettings: Promise<ShopSettings> | null = null;
 
   constructor(
     private readonly catalogue: CatalogueService,
@@ -45,8 +46,14 @@ export class ResultSession {
     private readonly cache?: ResultCache,
   ) {}
 
+  /** One read of the shop's settings per request. */
+  private shop(): Promise<ShopSettings> {
+    this.shopSettings ??= this.settings.get();
+    return this.shopSettings;
+  }
+
   private designBasis(): Promise<DesignBasis> {
-    this.design ??= this.settings.get().then(designBasisOf);
+    this.design ??= this.shop().then(designBasisOf);
     return this.design;
   }
 
@@ -61,7 +68,7 @@ export class ResultSession {
 
   /** The shop's support and clearance rules for the system check. */
   async systemBasis(): Promise<SystemBasis> {
-    return systemBasisOf(await this.settings.get());
+    return systemBasisOf(await this.shop());
   }
 
   /** The material cost in the shop's currency where a rate allows; otherwise left in the alloy's own currency. */

@@ -165,3 +165,8 @@ export { fieldsFromZodError } from './field-errors';
 export { calculateRun, CAUTIONS, type CalculateRunOptions } from '../engine/calculate-run';
 export { EngineInputError, isEngineInputError } from '../engine/errors';
 export type { RunResult } from '../engine/types';
+
+/** Query of answers that carry run results: the full curves and every flex candidate only with include=curves. */
+export const resultDetailQuerySchema = z.object({
+  include: z.enum(['curves'], { error: 'Use include=curves' }).optional(),
+});

@@ -6,7 +6,7 @@ import { runFieldPath, toCalcRequest } from '../jobs/run-input';
 import type { LimitStatus, RunResult } from '../engine/types';
 import type { StressFigure } from '../jobs/stress-figure';
 import type { SystemCheck } from '../jobs/system-check';
-import { calcRunRequestSchema, flexOptionsSchema, segmentSchema, slipOptionsSchema, tubeSchema } from './calc';
+import { calcRunRequestSchema, flexOptionsSchema, resultDetailQuerySchema, segmentSchema, slipOptionsSchema, tubeSchema } from './calc';
 
 const text = (what: string, max: number) =>
   z
@@ -49,9 +49,7 @@ export const jobListQuerySchema = z.object({
 });
 
 /** Query of GET /api/jobs/:id: results carry the chart curves and every flex candidate only when asked. */
-export const jobDetailQuerySchema = z.object({
-  include: z.enum(['curves'], { error: 'Use include=curves' }).optional(),
-});
+export const jobDetailQuerySchema = resultDetailQuerySchema;
 export type JobListQuery = z.infer<typeof jobListQuerySchema>;
 
 // ---- runs ----
