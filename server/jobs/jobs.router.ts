@@ -10,7 +10,6 @@ import {
   runPatchSchema,
 } from '../../shared/schemas/jobs';
 import { currentUser, requireRole, requireSignedIn } from '../auth/session';
-import { AppError } from '../http/app-error';
 import { parseBody, parsePatch, parseQuery } from '../http/validate';
 import type { JobsService } from './jobs.service';
 
