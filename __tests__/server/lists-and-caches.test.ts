@@ -63,6 +63,31 @@ describe('the alloy list, paged in the database', () => {
     expect(pages.flat().map((a) => a.id)).toEqual(expected);
   });
 
+  it('when a searched or filtered alloy is retired, then the total leaves it out for readers and counts it for an admin who asks, as the pages do', async () => {
+    const fab = await signedIn(t.app, 'fabricator');
+    const admin = await signedIn(t.app, 'admin');
+    const answer = async (c: Client, query: Record<string, string | number>) => (await c.get('/api/alloys').query({ pageSize: 200, ...query })).body as { items: AlloySummary[]; total: number };
+    const h = (await answer(fab, { search: 'S32109' })).items.find((a) => a.uns === 'S32109')!;
+    const before = await answer(fab, { search: 'type 321' });
+    const hotBefore = await answer(fab, { minServiceC: 800 });
+    expect(before.total).toBe(2);
+    expect((await admin.post(`/api/alloys/${h.id}/retire`).send({ note: 'Count check' })).status).toBe(200);
+    try {
+      for (const [query, was] of [[{ search: 'type 321' }, before], [{ minServiceC: 800 }, hotBefore]] as const) {
+        const reader = await answer(fab, query);
+        expect(reader.total).toBe(was.total - 1);
+        expect(reader.items.length).toBe(reader.total);
+        expect(reader.items.map((a) => a.id)).not.toContain(h.id);
+        const asked = await answer(admin, { ...query, includeRetired: 'true' });
+        expect(asked.total).toBe(was.total);
+        expect(asked.items.length).toBe(asked.total);
+      }
+    } finally {
+      expect((await admin.post(`/api/alloys/${h.id}/restore`).send({ note: 'Count check done' })).status).toBe(200);
+    }
+    expect((await answer(fab, { search: 'type 321' })).total).toBe(2);
+  });
+
   it('when searching in another case, with spaces or hyphens, then the same alloys match; a LIKE wildcard matches only itself', async () => {
     const fab = await signedIn(t.app, 'fabricator');
     const ids = async (search: string) => ((await fab.get('/api/alloys').query({ search })).body.items as AlloySummary[]).map((a) => a.designation);

@@ -38,6 +38,7 @@ function summaryOf(row: AlloyListRow, cte: CtePoint[], atC: number, editor: bool
 export async function alloyListPage(
   rows: AlloyListRows,
   ctePoints: (versionIds: string[]) => Promise<Map<string, CtePoint[]>>,
+  count: (filter: AlloyListFilter) => Promise<number>,
   query: AlloyListQuery,
   filter: AlloyListFilter,
   editor: boolean,
@@ -53,7 +54,7 @@ export async function alloyListPage(
   }
   const page = await rows.rows(filter, query.sort, { offset, limit: query.pageSize });
   // A page that is not full is the last one: the total follows without counting.
-  const total = page.length < query.pageSize && (page.length > 0 || offset === 0) ? offset + page.length : await rows.count(filter);
+  const total = page.length < query.pageSize && (page.length > 0 || offset === 0) ? offset + page.length : await count(filter);
   const cte = await ctePoints(page.map((r) => r.versionId));
   return { items: page.map((r) => summaryOf(r, cte.get(r.versionId)!, query.atC, editor)), total };
 }

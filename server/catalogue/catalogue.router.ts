@@ -33,7 +33,7 @@ export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvServ
   router.get('/alloys', requireSignedIn, async (req, res) => {
     const query = alloyListQuerySchema.safeParse(req.query);
     if (!query.success) throw AppError.badRequest('invalid_query', 'Some filters are not valid.', fieldsFromZod(query.error));
-    res.json(await service.list(query.data, req.user!));
+    res.type('application/json').send(await service.listing.listJson(query.data, req.user!));
   });
 
   router.get('/alloys/export.csv', requireSignedIn, async (req, res) => {

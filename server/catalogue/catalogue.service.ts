@@ -3,7 +3,6 @@ import { diffAlloy, stripMeta } from '../../shared/catalogue/alloy-diff';
 import { designationKey, searchText } from '../../shared/catalogue/designation-key';
 import { toAlloyData } from '../../shared/catalogue/to-alloy-data';
 import type { AlloyData } from '../../shared/engine/types';
-import type { PublicUser } from '../../shared/schemas/auth';
 import {
   alloyInputSchema,
   type AlloyDetail,
@@ -22,17 +21,11 @@ import { fieldsFromZod } from '../http/validate';
 import { Alloy, AlloyRevision, AlloyVersion, PropertyPoint, Source, type PropertyKind } from './catalogue.entities';
 import type { CatalogueRepository, CatalogueStore } from './catalogue.repository';
 import { StampedCache } from '../cache/stamped-cache';
-import { alloyListPage } from './alloy-list';
-import type { CtePoint } from './alloy-list.repository';
+import { canEdit, type Actor } from './actor';
+import { AlloyListing } from './alloy-listing';
 import { citedSourceIds, datasheetView, revisionView, sourceView, versionView } from './catalogue.views';
 
-export type Actor = (Pick<PublicUser, 'name' | 'role'> & { id: string | null }) | null;
-
-/** Who writes what the seed adds: full rights, no user row. */
-export const SEED_ACTOR: Actor = { id: null, name: 'Dilato seed', role: 'admin' };
-
-const EDITORS = new Set(['engineer', 'admin']);
-export const canEdit = (actor: Actor) => actor !== null && EDITORS.has(actor.role);
+export { canEdit, SEED_ACTOR, type Actor } from './actor';
 
 /** The published data the calculator uses, with the version it came from. */
 export interface PublishedAlloy {
@@ -50,12 +43,12 @@ const TABLE_VALUE: Record<PropertyKind, 'meanUmPerMK' | 'gpa' | 'mpa'> = { cte: 
 
 export class CatalogueService {
   private readonly published = new StampedCache<PublishedAlloy | null>();
-  /** Expansion tables by version id for the list's growth column; an edit of a draft's tables bumps the stamp. */
-  private readonly cteTables = new StampedCache<CtePoint[]>(20_000);
-  /** Whole list pages by query and role: a shop's people mostly ask for the same few pages. */
-  private readonly listPages = new StampedCache<{ items: AlloySummary[]; total: number }>(500);
+  /** The alloy list's pages, counts and answers, cached under the catalogue stamp. */
+  readonly listing: AlloyListing;
 
-  constructor(private readonly store: CatalogueStore) {}
+  constructor(private readonly store: CatalogueStore) {
+    this.listing = new AlloyListing(store);
+  }
 
   // ---- reading ----
 
@@ -65,20 +58,8 @@ export class CatalogueService {
     return new Map(versions.map((v) => [v.id, versionView(v, points)]));
   }
 
-  async list(query: AlloyListQuery, actor: Actor): Promise<{ items: AlloySummary[]; total: number }> {
-    const editor = canEdit(actor);
-    const filter = {
-      withDrafts: editor && query.includeDrafts,
-      withRetired: editor && query.includeRetired,
-      search: query.search,
-      family: query.family,
-      minServiceC: query.minServiceC,
-    };
-    const repo = this.store.read();
-    const stamp = await repo.stamps.read('catalogue');
-    const ctePoints = (ids: string[]) => this.cteTables.getMany(stamp, ids, (missing) => repo.list.ctePoints(missing));
-    const key = JSON.stringify([query, filter, editor]);
-    return this.listPages.get(stamp, key, () => alloyListPage(repo.list, ctePoints, query, filter, editor));
+  list(query: AlloyListQuery, actor: Actor): Promise<{ items: AlloySummary[]; total: number }> {
+    return this.listing.list(query, actor);
   }
 
   async visibleAlloy(repo: CatalogueRepository, id: string, actor: Actor): Promise<Alloy> {
