@@ -14,6 +14,11 @@ export class CurrencyRatesService {
     private readonly settings: ShopSettingsService,
   ) {}
 
+  /** The rates' cache stamp: it moves on every set or removed rate, on any instance. */
+  stamp(): Promise<number> {
+    return this.repo.stamp();
+  }
+
   async table(): Promise<CurrencyRatesView> {
     const [{ currency }, rows] = await Promise.all([this.settings.get(), this.repo.all()]);
     return { shopCurrency: currency, rates: rows.map(view) };

@@ -1,6 +1,6 @@
+import { rawRows } from '../db/raw-sql';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { JobListQuery } from '../../shared/schemas/jobs';
-import { User } from '../users/user.entity';
 import { Job, JobRun } from './job.entities';
 import { build, Store } from '../db/store';
 import { ActivityRows } from '../activity/activity.repository';
@@ -60,7 +60,7 @@ export class JobsRepository {
 
   async userNames(ids: string[]): Promise<Map<string, string>> {
     if (ids.length === 0) return new Map();
-    const users = await this.m.find(User, { where: { id: In(ids) }, select: { id: true, name: true } });
+    const users = await rawRows<{ id: string; name: string }>(this.m, `SELECT id, name FROM app_user WHERE id IN (${ids.map(() => '?').join(', ')})`, ids);
     return new Map(users.map((u) => [u.id, u.name]));
   }
 

@@ -29,7 +29,7 @@ export function jobsRouter(service: JobsService): Router {
 
   router.get('/jobs/:id', requireSignedIn, async (req, res) => {
     const { include } = parseQuery(jobDetailQuerySchema, req.query);
-    res.json({ job: await service.detail(id(req.params), include === 'curves') });
+    res.type('application/json').send(await service.detailJson(id(req.params), include === 'curves'));
   });
 
   router.patch('/jobs/:id', editors, async (req, res) => {

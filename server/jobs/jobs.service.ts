@@ -28,6 +28,8 @@ import type { JobsRepository, JobsStore } from './jobs.repository';
 import { briefRun } from './brief-results';
 import { jobSummary, jobView, revisionOf, runFieldsOf, runView } from './jobs.views';
 import type { Computed, ResultSession, RunResults } from './run-results';
+import { JobAnswers } from './job-answers';
+import { laterThan } from './revision-time';
 
 /** Gives runs positions 1..n in the order given; returns the runs whose position changed. */
 function renumber(runs: JobRun[]): JobRun[] {
@@ -62,6 +64,8 @@ export class JobsService {
     private readonly results: RunResults,
   ) {}
 
+  private readonly answers = new JobAnswers();
+
   // ---- reading ----
 
   private async computeAll(session: ResultSession, runs: JobRun[]): Promise<RunView[]> {
@@ -86,9 +90,23 @@ export class JobsService {
     return { items, total, page: query.page, pageSize: query.pageSize };
   }
 
-  private async detailIn(repo: JobsRepository, job: Job, full = false): Promise<JobDetail> {
-    const [runs, names] = await Promise.all([repo.runsOf(job.id), repo.userNames(job.createdBy ? [job.createdBy] : [])]);
+  /** `GET /api/jobs/:id`'s answer as JSON text, kept while nothing it rests on has changed (see JobAnswers). */
+  async detailJson(id: string, full = false): Promise<string> {
+    const repo = this.store.read();
+    const job = await this.jobIn(repo, id);
+    const names = await repo.userNames(job.createdBy ? [job.createdBy] : []);
     const session = this.results.session();
+    const creator = job.createdBy ? (names.get(job.createdBy) ?? '') : '';
+    return this.answers.get(job, creator, full, session, () => this.detailOf(repo, job, names, session, full));
+  }
+
+  private async detailIn(repo: JobsRepository, job: Job, full = false): Promise<JobDetail> {
+    const names = await repo.userNames(job.createdBy ? [job.createdBy] : []);
+    return this.detailOf(repo, job, names, this.results.session(), full);
+  }
+
+  private async detailOf(repo: JobsRepository, job: Job, names: Map<string, string>, session: ResultSession, full: boolean): Promise<JobDetail> {
+    const runs = await repo.runsOf(job.id);
     const views = await this.computeAll(session, runs);
     return {
       ...jobView(job, names),
@@ -173,7 +191,7 @@ export class JobsService {
     await this.store.write(async (repo) => {
       const job = await this.jobIn(repo, id);
       const changes = changesBetween(job, patch);
-      await repo.saveJob(Object.assign(job, patch, { updatedAt: new Date() }));
+      await repo.saveJob(Object.assign(job, patch, { updatedAt: laterThan(job.updatedAt) }));
       if (changes.length === 0) return;
       const onlyStatus = changes.length === 1 && changes[0].path === 'status';
       const action = onlyStatus ? (patch.status === 'archived' ? 'archived' : 'unarchived') : 'edited';
@@ -205,7 +223,7 @@ export class JobsService {
     if (job.status === 'archived') {
       throw AppError.conflict('job_archived', 'This job is archived. Unarchive it to change its runs.');
     }
-    job.updatedAt = new Date();
+    job.updatedAt = laterThan(job.updatedAt);
     await repo.saveJob(job);
     return job;
   }
@@ -343,6 +361,6 @@ function applyFields(run: JobRun, fields: RunFields, now: Date): JobRun {
     supports: fields.supports,
     nearby: fields.nearby,
     notes: fields.notes,
-    updatedAt: now,
+    updatedAt: run.updatedAt ? laterThan(run.updatedAt) : now,
   });
 }

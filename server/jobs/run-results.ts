@@ -66,6 +66,16 @@ export class ResultSession {
     return `${catalogue}|${flex.stamp}|${JSON.stringify(design)}`;
   }
 
+  /**
+   * What a whole job answer rests on besides the job itself: the results' basis, the currency rates'
+   * stamp (material costs are converted after the result cache) and all the shop's settings (the
+   * system check's rules, the shop's currency).
+   */
+  async answerBasis(): Promise<string> {
+    const [basis, rates, shop] = await Promise.all([this.basisKey(), this.currencyRates?.stamp() ?? 0, this.shop()]);
+    return `${basis}|${rates}|${JSON.stringify(shop)}`;
+  }
+
   /** The shop's support and clearance rules for the system check. */
   async systemBasis(): Promise<SystemBasis> {
     return systemBasisOf(await this.shop());
