@@ -12,4 +12,12 @@ config.resolver.resolveRequest = (context, moduleName, platform) => {
   return resolved;
 };
 
+// A module runs when its export is first used, not when the bundle starts: the sign-in screen then
+// evaluates only what it draws (Metro's inline requires; side-effect imports still run in order).
+const expoTransformOptions = config.transformer.getTransformOptions;
+config.transformer.getTransformOptions = async (...args) => {
+  const options = await expoTransformOptions(...args);
+  return { ...options, transform: { ...options.transform, inlineRequires: true } };
+};
+
 module.exports = config;

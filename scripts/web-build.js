@@ -2,6 +2,7 @@
 const fs = require('node:fs');
 const path = require('node:path');
 const { spawnSync } = require('node:child_process');
+const { compressWebExport } = require('./compress-web');
 
 const root = path.resolve(__dirname, '..');
 const distIndex = path.join(root, 'dist', 'index.html');
@@ -39,6 +40,7 @@ function ensureWebBuild() {
     console.error('[dilato] the web build failed; see the output above.');
     process.exit(result.status ?? 1);
   }
+  compressWebExport(path.join(root, 'dist'));
   // The index takes the build's start time: a source saved while the build ran is newer, so the next run builds again.
   const startedAt = new Date(started);
   fs.utimesSync(distIndex, startedAt, startedAt);

@@ -6,6 +6,9 @@ import zlib from 'node:zlib';
 import { chromium, type Browser } from 'playwright-core';
 import { median, startChild, stop, type Target } from './http-load';
 import type { Row } from './server-bench';
+// The build's own compression step (a plain Node script, shared with scripts/web-build.js).
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const { compressWebExport } = require('../compress-web') as { compressWebExport: (dir: string) => { files: number; bytes: number } };
 
 const PAIRS = 7;
 const FLOOR_APP = path.join(__dirname, '..', 'bench-floor-app');
@@ -34,6 +37,8 @@ function exportFloorApp(outDir: string) {
     env: { ...process.env, EXPO_OFFLINE: '1', CI: '1', EXPO_NO_TELEMETRY: '1' },
   });
   if (result.status !== 0) throw new Error(`the floor app's export failed:\n${result.stdout}\n${result.stderr}`);
+  // Served as the product's export is: compressed once at build time.
+  compressWebExport(outDir);
 }
 
 interface Load {

@@ -1,9 +1,11 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import express, { type RequestHandler, Router } from 'express';
+import { type RequestHandler, Router } from 'express';
+import expressStaticGzip from 'express-static-gzip';
 
 /** The export names scripts and fonts after a hash of their content, so a cached copy is never stale. */
 export function isContentHashed(relativePath: string): boolean {
+  relativePath = relativePath.replace(/\.(br|gz)$/, '');
   const inHashedFolder = relativePath.startsWith(`_expo${path.sep}static${path.sep}`) || relativePath.startsWith(`assets${path.sep}`);
   return inHashedFolder && /[.-][0-9a-f]{20,}\.[a-z0-9]+$/.test(relativePath);
 }
@@ -15,12 +17,19 @@ export function isContentHashed(relativePath: string): boolean {
 export function webApp(webDir: string): Router {
   const router = Router();
   const indexFile = path.join(webDir, 'index.html');
+  // The build writes .br and .gz beside the hashed files (scripts/compress-web.js); a file without them
+  // goes out as it is and the app's compression middleware compresses it on the way.
   router.use(
-    express.static(webDir, {
+    expressStaticGzip(webDir, {
+      enableBrotli: true,
+      orderPreference: ['br', 'gz'],
       index: false,
-      maxAge: '1h',
-      setHeaders: (res, filePath) => {
-        if (isContentHashed(path.relative(webDir, filePath))) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+      serveStatic: {
+        index: false,
+        maxAge: '1h',
+        setHeaders: (res, filePath) => {
+          if (isContentHashed(path.relative(webDir, filePath))) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+        },
       },
     }),
   );
