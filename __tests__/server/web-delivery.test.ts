@@ -7,9 +7,10 @@ import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
 import { isContentHashed } from '../../server/web/web-app';
+import { createTestApp, signedIn, type TestApp } from './test-app';
+
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const { compressWebExport } = require('../../scripts/compress-web') as { compressWebExport: (dir: string) => { files: number; bytes: number } };
-import { createTestApp, signedIn, type TestApp } from './test-app';
 
 let t: TestApp;
 const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-web-'));
