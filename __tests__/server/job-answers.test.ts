@@ -107,6 +107,41 @@ describe('the job answer kept between requests', () => {
   });
 });
 
+describe('the job list kept between requests', () => {
+  const page = async (c: Client) => {
+    const res = await c.get('/api/jobs').query({ status: 'all', pageSize: 100 });
+    expect(res.status).toBe(200);
+    return { text: res.text, items: res.body.items as { id: string; name: string; totalGrowthMm: number; runCount: number }[] };
+  };
+
+  it('when nothing changed, then the same text; a run edit, a rename and a job made on another instance each show at once', async () => {
+    const mailer = new Mailer('smtp://127.0.0.1:9');
+    try {
+      const fab = await signedIn(t.app, 'fabricator');
+      const { job, run } = await jobWithRun(fab);
+      const first = await page(fab);
+      expect((await page(fab)).text).toBe(first.text);
+      const before = first.items.find((j) => j.id === job.id)!;
+      expect(before.runCount).toBe(1);
+
+      expect((await fab.patch(`/api/runs/${run.id}`).send({ segments: [{ lengthMm: 3000, startTempC: 600, endTempC: 600 }] })).status).toBe(200);
+      // Three times the length at the same temperature grows three times as much.
+      expect((await page(fab)).items.find((j) => j.id === job.id)!.totalGrowthMm).toBeCloseTo(3 * before.totalGrowthMm, 9);
+
+      expect((await fab.patch(`/api/jobs/${job.id}`).send({ name: 'Renamed answer cache job' })).status).toBe(200);
+      expect((await page(fab)).items.find((j) => j.id === job.id)!.name).toBe('Renamed answer cache job');
+
+      const other = createApp(t.dataSource, { uploadsDir: t.uploadsDir, mailer });
+      const there = client(other);
+      expect((await there.post('/api/auth/sign-in').send({ email: demoEmail('fabricator'), password: DEMO_PASSWORD })).status).toBe(200);
+      const made = await newJob(there, 'Made on the other instance');
+      expect((await page(fab)).items.map((j) => j.id)).toContain(made.id);
+    } finally {
+      mailer.close();
+    }
+  });
+});
+
 describe('revision times', () => {
   it('when the last save is stamped later than the clock (same millisecond or a clock step back), then the next is 1 ms after it', () => {
     const ahead = new Date(Date.now() + 60_000);

@@ -2,7 +2,7 @@ import type { EntityManager } from 'typeorm';
 import { rawRows } from '../db/raw-sql';
 import { CacheStamp } from './cache-stamp.entity';
 
-export type StampName = 'catalogue' | 'flex_parts' | 'currency_rates';
+export type StampName = 'catalogue' | 'flex_parts' | 'currency_rates' | 'jobs';
 
 /** Reads and bumps the stamps; bind it to a write's transaction so the bump commits with the change. */
 export class CacheStamps {

@@ -1,3 +1,4 @@
+import { CacheStamps } from '../cache/cache-stamps.repository';
 import { rawRows } from '../db/raw-sql';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { JobListQuery } from '../../shared/schemas/jobs';
@@ -11,9 +12,11 @@ const likePattern = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}
 export class JobsRepository {
   /** Who changed what, written in the same transaction as the change. */
   readonly activity: ActivityRows;
+  readonly stamps: CacheStamps;
 
   constructor(private readonly m: EntityManager) {
     this.activity = new ActivityRows(m);
+    this.stamps = new CacheStamps(m);
   }
 
   /** One page of jobs, newest change first, and how many match in all. */
@@ -38,8 +41,11 @@ export class JobsRepository {
   findJobByName(name: string) {
     return this.m.findOneBy(Job, { name });
   }
-  saveJob(job: Job) {
-    return this.m.save(Job, job);
+  /** Every job write, and every run change through its job, moves the `jobs` stamp in the same transaction (job list answers are kept by it). */
+  async saveJob(job: Job) {
+    const saved = await this.m.save(Job, job);
+    await this.stamps.bump('jobs');
+    return saved;
   }
 
   runsOf(jobId: string) {

@@ -20,7 +20,7 @@ export function jobsRouter(service: JobsService): Router {
   const id = (params: Record<string, unknown>) => params.id as string;
 
   router.get('/jobs', requireSignedIn, async (req, res) => {
-    res.json(await service.list(parseQuery(jobListQuerySchema, req.query)));
+    res.type('application/json').send(await service.lists.json(parseQuery(jobListQuerySchema, req.query)));
   });
 
   router.post('/jobs', editors, async (req, res) => {

@@ -11,7 +11,6 @@ import {
   type JobDetail,
   type JobListQuery,
   type JobPatchInput,
-  type JobSummary,
   type RunCreateInput,
   type RunFields,
   type RunOrderInput,
@@ -26,9 +25,10 @@ import { fieldsFromZod } from '../http/validate';
 import { Job, JobRun } from './job.entities';
 import type { JobsRepository, JobsStore } from './jobs.repository';
 import { briefRun } from './brief-results';
-import { jobSummary, jobView, revisionOf, runFieldsOf, runView } from './jobs.views';
+import { jobView, revisionOf, runFieldsOf, runView } from './jobs.views';
 import type { Computed, ResultSession, RunResults } from './run-results';
 import { JobAnswers } from './job-answers';
+import { JobList, type JobPage } from './job-list';
 import { laterThan } from './revision-time';
 
 /** Gives runs positions 1..n in the order given; returns the runs whose position changed. */
@@ -62,9 +62,13 @@ export class JobsService {
   constructor(
     private readonly store: JobsStore,
     private readonly results: RunResults,
-  ) {}
+  ) {
+    this.lists = new JobList(store, results);
+  }
 
   private readonly answers = new JobAnswers();
+  /** Pages of the job list and their answers. */
+  readonly lists: JobList;
 
   // ---- reading ----
 
@@ -72,22 +76,9 @@ export class JobsService {
     return Promise.all(runs.map((run) => this.answer(session, run)));
   }
 
-  /** One page of jobs; only runs of the page's jobs are read, and only for jobs whose totals are not cached for this revision. */
-  async list(query: JobListQuery): Promise<{ items: JobSummary[]; total: number; page: number; pageSize: number }> {
-    const repo = this.store.read();
-    const [jobs, total] = await repo.listJobs(query);
-    const session = this.results.session();
-    const basis = await session.basisKey();
-    const keyOf = (job: Job) => `${job.id}@${new Date(job.updatedAt).getTime()}|${basis}`;
-    const missing = jobs.filter((job) => this.results.jobTotals.get(keyOf(job)) === undefined);
-    // Computed without keeping each full result: the totals are what the list keeps.
-    const runs = await repo.runsOfJobs(missing.map((j) => j.id));
-    const views = await Promise.all(runs.map(async (run) => runView(run, await session.compute(runFieldsOf(run)))));
-    const byJob = new Map<string, RunView[]>(missing.map((j) => [j.id, []]));
-    for (const view of views) byJob.get(view.jobId)!.push(view);
-    for (const job of missing) this.results.jobTotals.set(keyOf(job), jobTotals(byJob.get(job.id)!));
-    const items = jobs.map((job) => jobSummary(job, this.results.jobTotals.get(keyOf(job))!));
-    return { items, total, page: query.page, pageSize: query.pageSize };
+  /** One page of jobs (see JobList). */
+  list(query: JobListQuery): Promise<JobPage> {
+    return this.lists.list(query);
   }
 
   /** `GET /api/jobs/:id`'s answer as JSON text, kept while nothing it rests on has changed (see JobAnswers). */
