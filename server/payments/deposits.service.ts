@@ -6,7 +6,7 @@ import type { PublicUser } from '../../shared/schemas/auth';
 import { AppError } from '../http/app-error';
 import type { Mailer, OutgoingMail } from '../mail/mailer';
 import type { Quote } from '../quotes/quote.entities';
-import { hashToken } from '../quotes/quotes.service';
+import { hashToken } from '../quotes/customer-quotes';
 import type { ShopSettingsService } from '../settings/shop-settings.service';
 import type { UsersRepository } from '../users/users.repository';
 import { Deposit } from './deposit.entities';

@@ -46,15 +46,15 @@ export function publicQuotesRouter(service: QuotesService, publicUrl?: string): 
   const router = Router();
   router.get('/quotes/:token', async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');
-    res.json({ quote: await service.openByToken(req.params.token as string) });
+    res.json({ quote: await service.customer.openByToken(req.params.token as string) });
   });
   router.post('/quotes/:token/accept', async (req, res) => {
     const body = parseBody(acceptQuoteSchema, req.body);
-    res.json({ quote: await service.decide(req.params.token as string, { accept: true, ...body }, originOf(req, publicUrl)) });
+    res.json({ quote: await service.customer.decide(req.params.token as string, { accept: true, ...body }, originOf(req, publicUrl)) });
   });
   router.post('/quotes/:token/decline', async (req, res) => {
     const body = parseBody(declineQuoteSchema, req.body);
-    res.json({ quote: await service.decide(req.params.token as string, { accept: false, ...body }, originOf(req, publicUrl)) });
+    res.json({ quote: await service.customer.decide(req.params.token as string, { accept: false, ...body }, originOf(req, publicUrl)) });
   });
   return router;
 }

@@ -1,14 +1,13 @@
-import { createHash, randomBytes, randomUUID } from 'node:crypto';
+import { randomBytes, randomUUID } from 'node:crypto';
 import { toShopCurrency } from '../../shared/currency/convert';
 import { peakTempC } from '../../shared/engine/limits';
 import { compareWithFirst, priceOption, type PricedAlloy, type PricedRunInput } from '../../shared/quotes/pricing';
 import type { PublicUser } from '../../shared/schemas/auth';
 import { optionKey, optionLimitState } from '../../shared/quotes/limit-cautions';
 import { overridesInForce, requireOverrides } from './limit-overrides';
-import { DEFAULT_PREFERENCES } from '../../shared/schemas/preferences';
 import { formatQuantity, type UnitSystem } from '../../shared/units';
 import type { PreferencesService } from '../preferences/preferences.service';
-import type { LimitOverrideInput, PublicQuoteView, QuoteInput, QuotePricing, QuoteStatus, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
+import type { LimitOverrideInput, QuoteInput, QuotePricing, QuoteSummary, QuoteView } from '../../shared/schemas/quotes';
 import type { CatalogueService, PublishedAlloy } from '../catalogue/catalogue.service';
 import type { CurrencyRatesService } from '../currency/currency-rates.service';
 import type { ActivityView } from '../../shared/schemas/activity';
@@ -18,22 +17,15 @@ import type { JobsStore } from '../jobs/jobs.repository';
 import type { Mailer } from '../mail/mailer';
 import type { ShopSettingsService } from '../settings/shop-settings.service';
 import type { UsersRepository } from '../users/users.repository';
-import { decisionMail, money, quoteMail } from './quote-emails';
+import { quoteMail } from './quote-emails';
 import { Quote, QuoteLimitOverride } from './quote.entities';
-import { overrideFor, publicOptions } from './public-options';
 import type { QuotesRepository, QuotesStore } from './quotes.repository';
-import type { DepositView } from '../../shared/schemas/deposits';
+import { CustomerQuotes, expireIfDue, hashToken, today, type DepositViews } from './customer-quotes';
 
-/** Where a quote's deposit stands (the payments feature answers). */
-export interface DepositViews {
-  viewOf(quote: Pick<Quote, 'id' | 'status' | 'acceptedOptionIndex' | 'snapshot'>): Promise<DepositView | null>;
-}
+export { hashToken, type DepositViews } from './customer-quotes';
 
 type Actor = Pick<PublicUser, 'id' | 'name' | 'role'>;
 
-export const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
-const today = () => new Date().toISOString().slice(0, 10);
-const OPEN: QuoteStatus[] = ['sent', 'viewed'];
 
 function alloyIdsOf(options: Quote['options']): string[] {
   return [...new Set(options.flatMap((o) => [o.alloyId, ...Object.values(o.runAlloys ?? {})]))];
@@ -48,19 +40,14 @@ export class QuotesService {
     private readonly users: UsersRepository,
     private readonly mailer: Mailer,
     private readonly currencyRates?: CurrencyRatesService,
-    private readonly deposits?: DepositViews,
-    private readonly preferences?: PreferencesService,
-  ) {}
-
-  /** The customer first reads the quote in the units of whoever prepared it. */
-  private async unitsOf(quote: Quote): Promise<UnitSystem> {
-    if (!this.preferences || !quote.createdBy) return DEFAULT_PREFERENCES.unitSystem;
-    return (await this.preferences.get(quote.createdBy)).unitSystem;
+    deposits?: DepositViews,
+    preferences?: PreferencesService,
+  ) {
+    this.customer = new CustomerQuotes(store, jobs, users, mailer, deposits, preferences);
   }
 
-  private depositOf(quote: Quote): Promise<DepositView | null> {
-    return this.deposits ? this.deposits.viewOf(quote) : Promise.resolve(null);
-  }
+  /** What the customer does through the private link. */
+  readonly customer: CustomerQuotes;
 
   // ---- pricing ----
 
@@ -125,17 +112,6 @@ export class QuotesService {
 
   // ---- views ----
 
-  /** Quotes past their date stop being open; the change is written the first time anyone looks. */
-  private async expireIfDue(repo: QuotesRepository, quote: Quote): Promise<Quote> {
-    if (OPEN.includes(quote.status) && quote.validUntil < today()) {
-      quote.status = 'expired';
-      quote.updatedAt = new Date();
-      await repo.save(quote);
-      await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status: 'expired', note: `Valid until ${quote.validUntil}`, by: null, at: new Date() });
-    }
-    return quote;
-  }
-
   private async view(repo: QuotesRepository, quote: Quote): Promise<QuoteView> {
     let pricing: QuotePricing | null = quote.snapshot;
     let pricingProblem: string | null = null;
@@ -169,13 +145,13 @@ export class QuotesService {
       sentAt: quote.sentAt ? new Date(quote.sentAt).toISOString() : null,
       events: events.map((e) => ({ at: new Date(e.at).toISOString(), status: e.status, note: e.note, by: e.by })),
       limitOverrides,
-      deposit: await this.depositOf(quote),
+      deposit: await this.customer.depositOf(quote),
     };
   }
 
   async list(): Promise<QuoteSummary[]> {
     const repo = this.store.read();
-    const quotes = await Promise.all((await repo.list()).map((q) => this.expireIfDue(repo, q)));
+    const quotes = await Promise.all((await repo.list()).map((q) => expireIfDue(repo, q)));
     const jobNames = new Map<string, string>();
     const items: QuoteSummary[] = [];
     for (const q of quotes) {
@@ -195,7 +171,7 @@ export class QuotesService {
         totalFrom: totals.length ? Math.min(...totals) : null,
         totalTo: totals.length ? Math.max(...totals) : null,
         updatedAt: new Date(q.updatedAt).toISOString(),
-        deposit: await this.depositOf(q),
+        deposit: await this.customer.depositOf(q),
       });
     }
     return items;
@@ -205,7 +181,7 @@ export class QuotesService {
     const repo = this.store.read();
     const quote = await repo.find(id);
     if (!quote) throw AppError.notFound('There is no such quote.');
-    return this.view(repo, await this.expireIfDue(repo, quote));
+    return this.view(repo, await expireIfDue(repo, quote));
   }
 
   async activity(id: string): Promise<ActivityView[]> {
@@ -338,93 +314,5 @@ export class QuotesService {
       throw new AppError(502, 'mail_failed', 'The e-mail could not be sent, so the quote stays a draft. Check the mail server and send it again.');
     }
     return this.get(id);
-  }
-
-  // ---- the customer, through the private link ----
-
-  private async byToken(repo: QuotesRepository, token: string): Promise<Quote> {
-    const quote = /^[A-Za-z0-9_-]{20,100}$/.test(token) ? await repo.findByTokenHash(hashToken(token)) : null;
-    if (!quote) throw new AppError(404, 'quote_not_found', 'This quote link is not valid.');
-    await this.expireIfDue(repo, quote);
-    if (quote.status === 'expired') throw new AppError(410, 'quote_expired', `This quote expired on ${quote.validUntil}.`);
-    return quote;
-  }
-
-  private async publicView(quote: Quote): Promise<PublicQuoteView> {
-    const pricing = quote.snapshot!;
-    const { jobName } = await this.jobRuns(quote.jobId).catch(() => ({ jobName: 'your system' }));
-    return {
-      number: quote.number,
-      shopName: pricing.settings.shopName,
-      customerName: quote.customerName,
-      customerCompany: quote.customerCompany,
-      jobName,
-      validUntil: quote.validUntil,
-      message: quote.message,
-      status: quote.status,
-      currency: pricing.currency,
-      acceptedOptionIndex: quote.acceptedOptionIndex,
-      units: await this.unitsOf(quote),
-      deposit: await this.depositOf(quote),
-      options: publicOptions(pricing),
-    };
-  }
-
-  async openByToken(token: string): Promise<PublicQuoteView> {
-    return this.store.write(async (repo) => {
-      const quote = await this.byToken(repo, token);
-      if (quote.status === 'sent') {
-        Object.assign(quote, { status: 'viewed', updatedAt: new Date() });
-        await repo.save(quote);
-        await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status: 'viewed', note: 'Opened by the customer', by: null, at: new Date() });
-      }
-      return this.publicView(quote);
-    });
-  }
-
-  async decide(token: string, decision: { accept: true; optionIndex: number; name: string } | { accept: false; name: string; reason: string }, origin: string): Promise<PublicQuoteView> {
-    const result = await this.store.write(async (repo) => {
-      const quote = await this.byToken(repo, token);
-      if (!OPEN.includes(quote.status)) throw AppError.conflict('already_decided', `This quote was already ${quote.status}.`);
-      const pricing = quote.snapshot!;
-      if (decision.accept && !pricing.options[decision.optionIndex]) {
-        throw AppError.badRequest('invalid_input', 'Choose one of the options.', { optionIndex: 'There is no such option' });
-      }
-      if (decision.accept && optionLimitState(pricing.options[decision.optionIndex]) === 'over' && !overrideFor(pricing.limitOverrides, decision.optionIndex)) {
-        throw AppError.conflict('over_limit', `Option ${decision.optionIndex + 1} runs over its material’s temperature limit and cannot be accepted here. Please ask ${pricing.settings.shopName} about it.`, {
-          optionIndex: 'Over its temperature limit',
-        });
-      }
-      const status: QuoteStatus = decision.accept ? 'accepted' : 'declined';
-      Object.assign(quote, { status, acceptedOptionIndex: decision.accept ? decision.optionIndex : null, decidedBy: decision.name, updatedAt: new Date() });
-      await repo.save(quote);
-      const note = decision.accept ? `Option ${decision.optionIndex + 1} (${pricing.options[decision.optionIndex].label})` : decision.reason || 'No reason given';
-      await repo.addEvent({ id: randomUUID(), quoteId: quote.id, status, note, by: decision.name, at: new Date() });
-      return quote;
-    });
-    const seller = result.createdBy ? await this.users.findById(result.createdBy) : null;
-    if (seller) {
-      const pricing = result.snapshot!;
-      const option = decision.accept ? pricing.options[decision.optionIndex] : undefined;
-      const { jobName } = await this.jobRuns(result.jobId).catch(() => ({ jobName: '' }));
-      await this.mailer.send(
-        decisionMail(
-          {
-            number: result.number,
-            jobName,
-            customerName: result.customerName,
-            customerCompany: result.customerCompany,
-            decidedBy: decision.name,
-            accepted: decision.accept,
-            optionLabel: option?.label,
-            total: option ? money(option.total, pricing.currency) : undefined,
-            reason: decision.accept ? undefined : decision.reason,
-            link: `${origin}/quotes/${result.id}`,
-          },
-          seller.email,
-        ),
-      );
-    }
-    return this.publicView(result);
   }
 }
