@@ -1,11 +1,9 @@
 import { randomUUID } from 'node:crypto';
 import { jobTotals } from '../../shared/jobs/job-totals';
-import { stressFigure } from '../../shared/jobs/stress-figure';
 import { checkSystem } from '../../shared/jobs/system-check';
 import type { PublicUser } from '../../shared/schemas/auth';
 import {
   runFieldsSchema,
-  type CompareRow,
   type CompareView,
   type JobCreateInput,
   type JobDetail,
@@ -26,9 +24,10 @@ import { Job, JobRun } from './job.entities';
 import type { JobsRepository, JobsStore } from './jobs.repository';
 import { briefRun } from './brief-results';
 import { jobView, revisionOf, runFieldsOf, runView } from './jobs.views';
-import type { Computed, ResultSession, RunResults } from './run-results';
+import type { ResultSession, RunResults } from './run-results';
 import { JobAnswers } from './job-answers';
 import { JobList, type JobPage } from './job-list';
+import { compareAlloys } from './run-compare';
 import { laterThan } from './revision-time';
 
 /** Gives runs positions 1..n in the order given; returns the runs whose position changed. */
@@ -41,21 +40,6 @@ function renumber(runs: JobRun[]): JobRun[] {
     }
   });
   return changed;
-}
-
-function figuresOf(c: Computed): CompareRow['figures'] {
-  if (!c.result || !c.currency) return null;
-  const r = c.result;
-  return {
-    growthMm: r.growthMm,
-    limitStatus: r.limit.status,
-    marginC: r.limit.marginC,
-    stress: stressFigure(r.restraint),
-    jointNeeded: r.restraint.jointNeeded,
-    massKg: r.massKg,
-    materialCost: r.materialCost,
-    currency: c.currency,
-  };
 }
 
 export class JobsService {
@@ -130,40 +114,9 @@ export class JobsService {
     return this.answer(this.results.session(), await this.runIn(this.store.read(), id));
   }
 
-  /** The run computed with each candidate alloy and with its own, and each candidate's difference from its own. */
+  /** The run computed with each candidate alloy and with its own (see compareAlloys). */
   async compare(id: string, alloyIds: string[]): Promise<CompareView> {
-    const run = await this.runIn(this.store.read(), id);
-    const session = this.results.session();
-    const lookups = await Promise.all(alloyIds.map((a) => session.alloy(a)));
-    const bad = alloyIds.filter((_, i) => lookups[i].state !== 'published');
-    if (bad.length > 0) {
-      throw AppError.badRequest('invalid_query', 'Some alloys cannot be compared.', {
-        alloyIds: `No published alloy with id ${bad.join(', ')}`,
-      });
-    }
-    const fields = runFieldsOf(run);
-    const revision = revisionOf(run);
-    // The joint is left out: the figures compared do not depend on it, and a slip member's data must not veto a candidate.
-    const opts = { withJoint: false };
-    const current = await session.compute(fields, fields.alloyId, opts, revision);
-    const base = figuresOf(current);
-    const candidates = await Promise.all(
-      alloyIds.map(async (alloyId): Promise<CompareRow> => {
-        const c = await session.compute(fields, alloyId, opts, revision);
-        const figures = figuresOf(c);
-        const difference =
-          figures && base
-            ? {
-                growthMm: figures.growthMm - base.growthMm,
-                marginC: figures.marginC - base.marginC,
-                massKg: figures.massKg - base.massKg,
-                materialCost: figures.currency === base.currency ? figures.materialCost - base.materialCost : null,
-              }
-            : null;
-        return { alloy: c.alloy, figures, problem: c.problem, difference };
-      }),
-    );
-    return { runId: run.id, current: { alloy: current.alloy, figures: base, problem: current.problem, difference: null }, candidates };
+    return compareAlloys(await this.runIn(this.store.read(), id), this.results.session(), alloyIds);
   }
 
   // ---- writing jobs ----
