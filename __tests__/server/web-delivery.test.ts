@@ -8,9 +8,8 @@ import path from 'node:path';
 import request from 'supertest';
 import { isContentHashed } from '../../server/web/web-app';
 import { createTestApp, signedIn, type TestApp } from './test-app';
+import { compressWebExport } from '../../scripts/compress-web';
 
-// eslint-disable-next-line @typescript-eslint/no-require-imports
-const { compressWebExport } = require('../../scripts/compress-web') as { compressWebExport: (dir: string) => { files: number; bytes: number } };
 
 let t: TestApp;
 const webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-web-'));

@@ -33,21 +33,9 @@ async function pairedThroughput(a: [Target, Req], b: [Target, Req]): Promise<[nu
 /**
  * Interleaved single requests, one at a time; p50 of each. Both sides first take the same warm-up
  * burst on the measured path, so a server started fresh is not compared cold against one that
- * earlier rows have already warmed.
+ * earlier rows have already warmed. The i-th sample asks `reqOf(i)` (-1 for the warm-up), so a row
+ * can ask something not asked before on each sample and no answer cache helps.
  */
-async function pairedLatency(a: [Target, Req], b: [Target, Req]): Promise<[number, number]> {
-  await throughput(a[0].port, a[1], 500);
-  await throughput(b[0].port, b[1], 500);
-  const xs: number[] = [];
-  const ys: number[] = [];
-  for (let i = 0; i < SAMPLES; i++) {
-    xs.push(await latency(a[0].port, a[1]));
-    ys.push(await latency(b[0].port, b[1]));
-  }
-  return [median(xs), median(ys)];
-}
-
-/** As `pairedLatency`, but each sample asks something not asked before (the i-th request of `reqOf`), so no answer cache helps. */
 async function pairedFirstAsks(a: [Target, (i: number) => Req], b: [Target, (i: number) => Req]): Promise<[number, number]> {
   await throughput(a[0].port, a[1](-1), 500);
   await throughput(b[0].port, b[1](-1), 500);
@@ -59,6 +47,9 @@ async function pairedFirstAsks(a: [Target, (i: number) => Req], b: [Target, (i: 
   }
   return [median(xs), median(ys)];
 }
+
+/** The same request on every sample. */
+const pairedLatency = (a: [Target, Req], b: [Target, Req]) => pairedFirstAsks([a[0], () => a[1]], [b[0], () => b[1]]);
 
 const get = (p: string, cookie: string): Req => ({ method: 'GET', path: p, headers: { cookie } });
 

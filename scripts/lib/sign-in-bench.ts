@@ -6,9 +6,7 @@ import zlib from 'node:zlib';
 import { chromium, type Browser } from 'playwright-core';
 import { median, startChild, stop, type Target } from './http-load';
 import type { Row } from './server-bench';
-// The build's own compression step (a plain Node script, shared with scripts/web-build.js).
-// eslint-disable-next-line @typescript-eslint/no-require-imports
-const { compressWebExport } = require('../compress-web') as { compressWebExport: (dir: string) => { files: number; bytes: number } };
+import { compressWebExport } from '../compress-web';
 
 const PAIRS = 7;
 const FLOOR_APP = path.join(__dirname, '..', 'bench-floor-app');

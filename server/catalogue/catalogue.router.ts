@@ -4,7 +4,7 @@ import { MAX_IMPORT_BYTES } from '../../shared/catalogue/catalogue-csv';
 import { alloyInputSchema, alloyListQuerySchema, alloyPatchSchema, reviewNoteSchema, sourceInputSchema } from '../../shared/schemas/alloy';
 import { requireRole, requireSignedIn } from '../auth/session';
 import { AppError } from '../http/app-error';
-import { fieldsFromZod, parseBody, parsePatch } from '../http/validate';
+import { parseBody, parsePatch, parseQuery } from '../http/validate';
 import type { CatalogueCsvService } from './catalogue-csv.service';
 import type { CatalogueService } from './catalogue.service';
 import type { CatalogueReviewService } from './review.service';
@@ -31,9 +31,7 @@ export function catalogueRouter(service: CatalogueService, csv: CatalogueCsvServ
   const admins = requireRole('admin');
 
   router.get('/alloys', requireSignedIn, async (req, res) => {
-    const query = alloyListQuerySchema.safeParse(req.query);
-    if (!query.success) throw AppError.badRequest('invalid_query', 'Some filters are not valid.', fieldsFromZod(query.error));
-    res.type('application/json').send(await service.listing.listJson(query.data, req.user!));
+    res.type('application/json').send(await service.listing.listJson(parseQuery(alloyListQuerySchema, req.query), req.user!));
   });
 
   router.get('/alloys/export.csv', requireSignedIn, async (req, res) => {

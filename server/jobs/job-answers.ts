@@ -15,10 +15,6 @@ export class JobAnswers {
 
   async get(job: Job, creator: string, full: boolean, session: ResultSession, build: () => Promise<JobDetail>): Promise<string> {
     const key = `${job.id}@${new Date(job.updatedAt).getTime()}|${full ? 'full' : 'brief'}|${creator}|${await session.answerBasis()}`;
-    const held = this.answers.get(key);
-    if (held !== undefined) return held;
-    const text = JSON.stringify({ job: await build() });
-    this.answers.set(key, text);
-    return text;
+    return this.answers.getOr(key, async () => JSON.stringify({ job: await build() }));
   }
 }

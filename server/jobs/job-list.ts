@@ -28,11 +28,7 @@ export class JobList {
     const session = this.results.session();
     const [stamp, basis] = await Promise.all([repo.stamps.read('jobs'), session.answerBasis()]);
     const key = `${stamp}|${basis}|${JSON.stringify(query)}`;
-    const held = this.answers.get(key);
-    if (held !== undefined) return held;
-    const text = JSON.stringify(await this.listIn(repo, session, query));
-    this.answers.set(key, text);
-    return text;
+    return this.answers.getOr(key, async () => JSON.stringify(await this.listIn(repo, session, query)));
   }
 
   private async listIn(repo: JobsRepository, session: ResultSession, query: JobListQuery): Promise<JobPage> {

@@ -37,6 +37,7 @@ export class ResultSession {
   private design: Promise<DesignBasis> | null = null;
   private rates: ReturnType<CurrencyRatesService['converter']> | null = null;
   private shopSettings: Promise<ShopSettings> | null = null;
+  private basis: Promise<string> | null = null;
 
   constructor(
     private readonly catalogue: CatalogueService,
@@ -61,9 +62,11 @@ export class ResultSession {
    * What every result of this request rests on besides the run itself: the catalogue's and flex parts'
    * stamps and the shop's design basis. A cached result is good while this and the run's revision stand.
    */
-  async basisKey(): Promise<string> {
-    const [catalogue, flex, design] = await Promise.all([this.catalogue.stamp(), this.parts(), this.designBasis()]);
-    return `${catalogue}|${flex.stamp}|${JSON.stringify(design)}`;
+  basisKey(): Promise<string> {
+    this.basis ??= Promise.all([this.catalogue.stamp(), this.parts(), this.designBasis()]).then(
+      ([catalogue, flex, design]) => `${catalogue}|${flex.stamp}|${JSON.stringify(design)}`,
+    );
+    return this.basis;
   }
 
   /**
