@@ -14,7 +14,7 @@ import { testingOnPostgres } from './test-database';
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const { throwawayDatabase } = require('../../scripts/lib/postgres-cluster');
 // eslint-disable-next-line @typescript-eslint/no-require-imports
-const { freePort, startServer, waitForHealth } = require('../../scripts/server-process');
+const { startOnFreePort, waitForHealth } = require('../../scripts/server-process');
 
 jest.setTimeout(180_000);
 
@@ -145,9 +145,9 @@ function getUrls(t: TestApp, fixtures: RouteFixtures): string[] {
     }
 
     // The same product on the copy, under the same public address (quote links name it): the sessions came along, so the same cookies are signed in there.
-    const port = await freePort();
-    server = startServer({ PORT: String(port), DATA_DIR: dataDir, DATABASE_URL: target.url, WEB_DIR: dataDir, PUBLIC_URL: ORIGIN }, 'ignore');
-    const base = `http://127.0.0.1:${port}`;
+    const copyServer = startOnFreePort({ DATA_DIR: dataDir, DATABASE_URL: target.url, WEB_DIR: dataDir, PUBLIC_URL: ORIGIN }, { timeoutMs: 90_000 });
+    server = copyServer.server;
+    const base: string = await copyServer.listening;
     await waitForHealth(base, server, 90_000);
     const differing: string[] = [];
     for (const [key, expected] of before) {

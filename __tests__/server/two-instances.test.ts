@@ -11,7 +11,7 @@ import { draftQuote } from './quote-helpers';
 import { demoEmail } from './test-app';
 import { openTestDatabase, testingOnPostgres, type TestDatabase } from './test-database';
 // eslint-disable-next-line @typescript-eslint/no-require-imports
-const { freePort, startServer, waitForHealth } = require('../../scripts/server-process');
+const { startOnFreePort, waitForHealth } = require('../../scripts/server-process');
 
 jest.setTimeout(120_000);
 
@@ -49,12 +49,12 @@ function browserOn(base: string, from = '203.0.113.9') {
   let b: string;
 
   async function instance(): Promise<string> {
-    const port = await freePort();
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'dilato-instance-'));
     dirs.push(dir);
-    const server = startServer({ PORT: String(port), DATA_DIR: dir, DATABASE_URL: db.url, SMTP_URL: smtp.url, TRUST_PROXY: '1', WEB_DIR: dir }, 'ignore');
+    // PORT=0: a port picked beforehand could be taken by another server starting in the same run.
+    const { server, listening } = startOnFreePort({ DATA_DIR: dir, DATABASE_URL: db.url, SMTP_URL: smtp.url, TRUST_PROXY: '1', WEB_DIR: dir }, { timeoutMs: 90_000 });
     servers.push(server);
-    const base = `http://127.0.0.1:${port}`;
+    const base: string = await listening;
     await waitForHealth(base, server, 90_000);
     return base;
   }
