@@ -51,8 +51,9 @@ export class DepositWebhooks {
           return null;
         }
         const paymentIntent = typeof session.payment_intent === 'string' ? session.payment_intent : (session.payment_intent?.id ?? null);
-        Object.assign(deposit, { status: 'paid', paymentIntentId: paymentIntent, checkoutSessionId: session.id, failureMessage: null, paidAt: new Date(), updatedAt: new Date() });
-        await repo.save(deposit);
+        const paid = { status: 'paid' as const, paymentIntentId: paymentIntent, checkoutSessionId: session.id, failureMessage: null, paidAt: new Date(), updatedAt: new Date() };
+        if (!(await repo.moveOn(deposit.id, ['pending', 'failed'], paid))) return null;
+        Object.assign(deposit, paid);
         const quote = (await repo.quotes.find(deposit.quoteId))!;
         await this.note(repo, quote, `Deposit paid (${formatMinor(deposit.amountMinor, deposit.currency)})`);
         return { quote, deposit, kind: 'paid', origin: session.metadata?.origin };
@@ -63,8 +64,9 @@ export class DepositWebhooks {
         // A failure counts only for the attempt still open: an old attempt's news cannot undo a newer one.
         if (!deposit || deposit.status !== 'pending' || intent.metadata.attempt !== String(deposit.attempts)) return null;
         const message = intent.last_payment_error?.message ?? 'The payment did not go through.';
-        Object.assign(deposit, { status: 'failed', failureMessage: message, checkoutUrl: null, updatedAt: new Date() });
-        await repo.save(deposit);
+        const failed = { status: 'failed' as const, failureMessage: message, checkoutUrl: null, updatedAt: new Date() };
+        if (!(await repo.moveOn(deposit.id, ['pending'], failed))) return null;
+        Object.assign(deposit, failed);
         await this.note(repo, (await repo.quotes.find(deposit.quoteId))!, `Deposit payment failed (attempt ${deposit.attempts}): ${message}`);
         return null;
       }
@@ -75,8 +77,9 @@ export class DepositWebhooks {
         // Still 'paid' here means the refund was made at the provider, not through Dilato's refund
         // (which marks the deposit refunded and mails the receipts itself): this event is the only news of it.
         if (!deposit || deposit.status !== 'paid') return null;
-        Object.assign(deposit, { status: 'refunded', refundedAt: new Date(), updatedAt: new Date() });
-        await repo.save(deposit);
+        const refunded = { status: 'refunded' as const, refundedAt: new Date(), updatedAt: new Date() };
+        if (!(await repo.moveOn(deposit.id, ['paid'], refunded))) return null;
+        Object.assign(deposit, refunded);
         const quote = (await repo.quotes.find(deposit.quoteId))!;
         await this.note(repo, quote, `Deposit refunded at the payment provider (${formatMinor(deposit.amountMinor, deposit.currency)})`);
         return { quote, deposit, kind: 'refunded', origin: typeof charge.metadata?.origin === 'string' ? charge.metadata.origin : undefined };

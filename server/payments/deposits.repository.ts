@@ -31,6 +31,17 @@ export class DepositsRepository {
   save(deposit: Deposit) {
     return this.m.save(Deposit, deposit);
   }
+  /**
+   * Writes `changes` only while the row still stands where the caller read it (`from` statuses, or
+   * not yet refunded through Dilato): a webhook and a refund can race on PostgreSQL, and a plain save
+   * of what one of them read would write the other's change back out. False when the row had moved on.
+   */
+  async moveOn(id: string, from: Deposit['status'][] | 'not_refunded_here', changes: Partial<Deposit>): Promise<boolean> {
+    const qb = this.m.createQueryBuilder().update(Deposit).set(changes).where('id = :id', { id });
+    if (from === 'not_refunded_here') qb.andWhere('refund_reason IS NULL');
+    else qb.andWhere('status IN (:...from)', { from });
+    return ((await qb.execute()).affected ?? 0) > 0;
+  }
   /** True the first time an event id is seen; false for a replay. */
   async firstSight(id: string, type: string): Promise<boolean> {
     if (await this.m.existsBy(PaymentEventSeen, { id })) return false;

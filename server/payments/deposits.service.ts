@@ -164,8 +164,9 @@ export class DepositsService {
       const quote = (await repo.quotes.find(quoteId))!;
       if (current.refundReason) return null;
       const before = current.status;
-      Object.assign(current, { status: 'refunded', refundId: refund.id, refundReason: reason, refundedAt: current.refundedAt ?? new Date(), updatedAt: new Date() });
-      await repo.save(current);
+      const refunded = { status: 'refunded' as const, refundId: refund.id, refundReason: reason, refundedAt: current.refundedAt ?? new Date(), updatedAt: new Date() };
+      if (!(await repo.moveOn(current.id, 'not_refunded_here', refunded))) return null;
+      Object.assign(current, refunded);
       await repo.quotes.addEvent({ id: randomUUID(), quoteId, status: quote.status, note: `Deposit refunded (${formatMinor(current.amountMinor, current.currency)}): ${reason}`, by: actor.name, at: new Date() });
       await repo.quotes.activity.add(
         { subject: 'quote', subjectId: quoteId, subjectName: quote.number, jobId: null, action: 'refunded', changes: [{ path: 'deposit', before, after: 'refunded' }, { path: 'refundReason', before: null, after: reason }] },
